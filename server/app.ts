@@ -1,0 +1,60 @@
+import express, { type Express } from "express";
+import type { Config } from "./config.ts";
+import type { Db } from "./db.ts";
+import type { Messenger } from "./messaging/messenger.ts";
+import { createSessionMiddleware } from "./auth/sessions.ts";
+import { createPassport } from "./auth/passport.ts";
+import { apiNotFound, errorHandler } from "./http/errors.ts";
+import { securityHeaders } from "./web/security-headers.ts";
+import { buildRouter } from "./http/route.ts";
+import { collectRoutes } from "./routes.ts";
+import { googleSignInRouter } from "./features/auth/routes.ts";
+import { serveBuiltApps, serveWithVite } from "./web/serve-apps.ts";
+
+export type AppDeps = {
+  config: Config;
+  db: Db;
+  messenger: Messenger;
+  log: (message: string, err?: unknown) => void;
+};
+
+export type BuiltApp = { app: Express; close: () => Promise<void> };
+
+/** How the two web apps are served: built files, Vite with hot reload, or not at all (API tests). */
+export type WebMode = "built" | "vite" | "none";
+
+/**
+ * Builds the Express app without listening, so tests can drive it with supertest and
+ * main.ts can add the web apps and a listener. Keeps no per-user state in memory.
+ */
+export async function createApp(deps: AppDeps, web: WebMode = "none"): Promise<BuiltApp> {
+  const { config } = deps;
+  const app = express();
+  app.disable("x-powered-by");
+  app.set("trust proxy", config.TRUST_PROXY);
+  app.use(securityHeaders(config.NODE_ENV === "development"));
+  app.use(express.json({ limit: "100kb" }));
+  app.use(express.urlencoded({ extended: false, limit: "100kb" }));
+
+  const sessions = createSessionMiddleware(config);
+  const passport = createPassport(config, deps.db);
+  app.use(sessions.middleware);
+  app.use(passport.session());
+
+  app.use(googleSignInRouter(passport));
+  app.use(buildRouter(collectRoutes(deps)));
+  app.use("/api", apiNotFound);
+
+  const vite = web === "vite" ? await serveWithVite(app) : undefined;
+  if (web === "built") serveBuiltApps(app);
+  app.get("/", (_req, res) => res.redirect("/portal/"));
+  app.use(errorHandler(deps.log));
+
+  return {
+    app,
+    close: async () => {
+      await vite?.close();
+      await sessions.close();
+    },
+  };
+}

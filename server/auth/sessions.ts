@@ -1,0 +1,43 @@
+import session from "express-session";
+import connectPgSimple from "connect-pg-simple";
+import pg from "pg";
+import type { RequestHandler } from "express";
+import type { Config } from "../config.ts";
+
+const sessionDays = 14;
+
+/**
+ * Sessions live in PostgreSQL so any server process can serve any request.
+ * The cookie is httpOnly and SameSite=Lax (so the OAuth redirect back still carries it),
+ * and Secure in production.
+ */
+export function createSessionMiddleware(config: Config): { middleware: RequestHandler; close: () => Promise<void> } {
+  const PgStore = connectPgSimple(session);
+  const pool = new pg.Pool({ connectionString: config.DATABASE_URL, max: 5 });
+  // A restarting database must not crash the process through an idle client's error.
+  pool.on("error", () => {});
+  const store = new PgStore({ pool, tableName: "sessions", createTableIfMissing: false, pruneSessionInterval: 15 * 60 });
+  const middleware = session({
+    name: "sproutline.sid",
+    store,
+    secret: config.SESSION_SECRET,
+    resave: false,
+    saveUninitialized: false,
+    rolling: true,
+    proxy: config.TRUST_PROXY > 0,
+    cookie: {
+      httpOnly: true,
+      sameSite: "lax",
+      secure: config.NODE_ENV === "production",
+      maxAge: sessionDays * 24 * 60 * 60 * 1000,
+      path: "/",
+    },
+  });
+  return {
+    middleware,
+    close: async () => {
+      store.close();
+      await pool.end();
+    },
+  };
+}

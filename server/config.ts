@@ -1,0 +1,62 @@
+import { z } from "zod";
+
+/**
+ * Everything the server reads from its environment, validated once at start.
+ * The *_BASE_URL settings point a real SDK at a local fake; production refuses them.
+ */
+const envSchema = z
+  .object({
+    NODE_ENV: z.enum(["development", "test", "production"]).default("development"),
+    PORT: z.coerce.number().int().min(0).max(65535).default(5180),
+    PUBLIC_URL: z.url().default("http://localhost:5180"),
+    DATABASE_URL: z.string().min(1, "DATABASE_URL is required"),
+    SESSION_SECRET: z.string().min(16, "SESSION_SECRET must be at least 16 characters"),
+    TRUST_PROXY: z.coerce.number().int().min(0).default(0),
+
+    SMTP_HOST: z.string().default("127.0.0.1"),
+    SMTP_PORT: z.coerce.number().int().default(2525),
+    SMTP_SECURE: z.stringbool().default(false),
+    SMTP_USER: z.string().optional(),
+    SMTP_PASSWORD: z.string().optional(),
+    EMAIL_FROM: z.string().default("Sproutline <plans@sproutline.example>"),
+
+    TWILIO_ACCOUNT_SID: z.string().default("AC00000000000000000000000000000000"),
+    TWILIO_AUTH_TOKEN: z.string().default("local-fake-auth-token"),
+    TWILIO_FROM: z.string().default("+15005550006"),
+    TWILIO_API_BASE_URL: z.url().optional(),
+
+    GOOGLE_CLIENT_ID: z.string().default("sproutline-local-client"),
+    GOOGLE_CLIENT_SECRET: z.string().default("sproutline-local-secret"),
+    GOOGLE_AUTH_BASE_URL: z.url().optional(),
+
+    /** Where the outbox page reads what the fakes received (development and tests only). */
+    FAKES_CONTROL_URL: z.url().optional(),
+    SIGN_IN_LINK_MINUTES: z.coerce.number().int().min(1).max(60).default(15),
+  })
+  .superRefine((env, ctx) => {
+    if (env.NODE_ENV !== "production") return;
+    for (const key of ["TWILIO_API_BASE_URL", "GOOGLE_AUTH_BASE_URL", "FAKES_CONTROL_URL"] as const) {
+      if (env[key]) {
+        ctx.addIssue({ code: "custom", path: [key], message: "local fakes are not allowed in production" });
+      }
+    }
+    if (env.TWILIO_AUTH_TOKEN === "local-fake-auth-token") {
+      ctx.addIssue({ code: "custom", path: ["TWILIO_AUTH_TOKEN"], message: "set real Twilio credentials in production" });
+    }
+    if (env.GOOGLE_CLIENT_SECRET === "sproutline-local-secret") {
+      ctx.addIssue({ code: "custom", path: ["GOOGLE_CLIENT_SECRET"], message: "set real Google credentials in production" });
+    }
+  });
+
+export type Config = z.infer<typeof envSchema>;
+
+export class ConfigError extends Error {}
+
+export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
+  const parsed = envSchema.safeParse(env);
+  if (!parsed.success) {
+    const lines = parsed.error.issues.map((i) => `  ${i.path.join(".")}: ${i.message}`);
+    throw new ConfigError(`Configuration is not valid:\n${lines.join("\n")}`);
+  }
+  return parsed.data;
+}

@@ -1,0 +1,73 @@
+import type { Config } from "../../config.ts";
+import type { Db } from "../../db.ts";
+import type { Messenger } from "../../messaging/messenger.ts";
+import { HttpError } from "../../http/errors.ts";
+import { companyName, findActiveCustomerByContact } from "../../auth/users-repo.ts";
+import { contactKey, parseContact, type Contact } from "./contact.ts";
+import { hashToken, newSignInToken } from "./tokens.ts";
+import * as repo from "./repo.ts";
+import { signInEmail, signInSms } from "./link-message.ts";
+
+/** Limits per 15 minutes; counted in PostgreSQL so they hold across server processes. */
+export const signInLimits = { windowMinutes: 15, perContact: 5, perIp: 30 };
+
+export type SignInDeps = { config: Config; db: Db; messenger: Messenger; log: (message: string, err?: unknown) => void };
+
+/**
+ * Issues a one-time link when the contact belongs to an active homeowner. The caller
+ * always answers the same way, so nobody can probe which addresses are customers.
+ */
+export async function requestSignInLink(deps: SignInDeps, rawContact: string, ip: string): Promise<void> {
+  const contact = parseContact(rawContact);
+  if (!contact) {
+    throw new HttpError(400, "invalid_input", "Some of the information is not valid.", {
+      contact: "Enter a valid e-mail address or mobile number",
+    });
+  }
+  const key = contactKey(contact);
+  const { windowMinutes, perContact, perIp } = signInLimits;
+  const [byContact, byIp] = await Promise.all([
+    repo.countRecentRequests(deps.db, "contact_key", key, windowMinutes),
+    repo.countRecentRequests(deps.db, "ip", ip, windowMinutes),
+  ]);
+  if (byContact >= perContact || byIp >= perIp) {
+    throw new HttpError(429, "rate_limited", "Too many sign-in links were requested. Please wait a few minutes and try again.", undefined, {
+      "Retry-After": String(windowMinutes * 60),
+    });
+  }
+  await repo.recordRequest(deps.db, key, ip);
+
+  const user = await findActiveCustomerByContact(deps.db, contact);
+  if (!user) return;
+  const token = newSignInToken();
+  const minutes = deps.config.SIGN_IN_LINK_MINUTES;
+  await repo.insertToken(deps.db, { userId: user.id, tokenHash: hashToken(token), channel: contact.email ? "email" : "sms", minutes });
+  const link = `${deps.config.PUBLIC_URL}/portal/sign-in/verify?token=${token}`;
+
+  // Not awaited: waiting for the provider would make known addresses answer slower than unknown ones.
+  void sendLink(deps, user.companyId, user.name, contact, link, minutes).catch((err) =>
+    deps.log(`sign-in link for user ${user.id} could not be sent`, err),
+  );
+}
+
+async function sendLink(deps: SignInDeps, companyId: number, name: string, contact: Contact, link: string, minutes: number) {
+  const company = await deps.db("companies").where({ id: companyId }).first<{ name: string; sms_sender_name: string }>("name", "sms_sender_name");
+  if (contact.email !== undefined) {
+    await deps.messenger.sendEmail(signInEmail(contact.email, name.split(" ")[0] ?? name, company?.name ?? "", link, minutes));
+  } else {
+    await deps.messenger.sendSms(signInSms(contact.phone, company?.sms_sender_name ?? "", link, minutes));
+  }
+}
+
+/** Returns the user id the link signs in, or explains why it cannot be used. */
+export async function consumeSignInLink(db: Db, token: string): Promise<number> {
+  const tokenHash = hashToken(token);
+  const userId = await repo.useToken(db, tokenHash);
+  if (userId !== undefined) return userId;
+  const state = await repo.tokenState(db, tokenHash);
+  if (state === "used") throw new HttpError(410, "link_used", "This sign-in link has already been used. Ask for a new one.");
+  if (state === "expired") throw new HttpError(410, "link_expired", "This sign-in link has expired. Ask for a new one.");
+  throw new HttpError(400, "link_invalid", "This sign-in link is not valid. Ask for a new one.");
+}
+
+export { companyName };

@@ -1,0 +1,29 @@
+import type { Db } from "../../db.ts";
+import type { PropertySummary } from "#shared/schemas/properties";
+
+type Row = {
+  id: number; customer_id: number; label: string; street: string; town: string; region: string;
+  postal_code: string; time_zone: string; lawn_area_ft2: number | null;
+};
+
+const toSummary = (r: Row): PropertySummary => ({
+  id: r.id, customerId: r.customer_id, label: r.label, street: r.street, town: r.town, region: r.region,
+  postalCode: r.postal_code, timeZone: r.time_zone, lawnAreaFt2: r.lawn_area_ft2,
+});
+
+function baseQuery(db: Db, companyId: number) {
+  return db("properties")
+    .join("customers", "customers.id", "properties.customer_id")
+    .where("customers.company_id", companyId)
+    .select<Row[]>("properties.id", "properties.customer_id", "properties.label", "properties.street", "properties.town",
+      "properties.region", "properties.postal_code", "properties.time_zone", "properties.lawn_area_ft2");
+}
+
+export async function listForCustomer(db: Db, companyId: number, customerId: number): Promise<PropertySummary[]> {
+  return (await baseQuery(db, companyId).where("properties.customer_id", customerId).orderBy("properties.id")).map(toSummary);
+}
+
+export async function findInCompany(db: Db, companyId: number, propertyId: number): Promise<PropertySummary | undefined> {
+  const row = await baseQuery(db, companyId).where("properties.id", propertyId).first();
+  return row ? toSummary(row) : undefined;
+}

@@ -1,0 +1,33 @@
+import { idParamSchema } from "#shared/schemas/properties";
+import type { Db } from "../../db.ts";
+import { notFound } from "../../http/errors.ts";
+import { route, type RouteSpec } from "../../http/route.ts";
+import type { SessionUser } from "../../auth/session-user.ts";
+import * as repo from "./repo.ts";
+
+/** A customer sees only their own lawns; anything else is "not found", never "forbidden", so ids don't leak. */
+export function canSeeProperty(user: SessionUser, property: { customerId: number }): boolean {
+  return user.role !== "customer" || property.customerId === user.customerId;
+}
+
+export function propertyRoutes(db: Db): RouteSpec[] {
+  return [
+    route({
+      method: "get",
+      path: "/api/my/properties",
+      access: ["customer"],
+      handler: async ({ user }) => ({ properties: await repo.listForCustomer(db, user.companyId, user.customerId ?? -1) }),
+    }),
+    route({
+      method: "get",
+      path: "/api/properties/:id",
+      access: ["customer", "technician", "manager"],
+      params: idParamSchema,
+      handler: async ({ user, params }) => {
+        const property = await repo.findInCompany(db, user.companyId, params.id);
+        if (!property || !canSeeProperty(user, property)) throw notFound("That property");
+        return { property };
+      },
+    }),
+  ];
+}

@@ -1,0 +1,73 @@
+import type { ErrorRequestHandler, RequestHandler } from "express";
+import type { ZodError } from "zod";
+
+/** An error the client should see as-is: status, a stable code, a plain message. */
+export class HttpError extends Error {
+  constructor(
+    readonly status: number,
+    readonly code: string,
+    message: string,
+    readonly fields?: Record<string, string>,
+    readonly headers?: Record<string, string>,
+  ) {
+    super(message);
+  }
+}
+
+export const notFound = (what = "That record") => new HttpError(404, "not_found", `${what} was not found.`);
+
+export function fieldErrors(error: ZodError, prefix?: string): Record<string, string> {
+  const fields: Record<string, string> = {};
+  for (const issue of error.issues) {
+    const key = [prefix, ...issue.path.map(String)].filter(Boolean).join(".") || "_";
+    fields[key] ??= issue.message;
+  }
+  return fields;
+}
+
+export const apiNotFound: RequestHandler = (req, _res, next) => {
+  next(new HttpError(404, "not_found", `No API route for ${req.method} ${req.path}.`));
+};
+
+/** Database unreachable or overloaded: the client may retry shortly. */
+function isDatabaseUnavailable(err: unknown): boolean {
+  const code = (err as { code?: string } | null)?.code;
+  const message = err instanceof Error ? err.message : "";
+  return (
+    code === "ECONNREFUSED" ||
+    code === "57P01" || // admin shutdown
+    code === "57P03" || // cannot connect now
+    code === "53300" || // too many connections
+    message.includes("Knex: Timeout acquiring a connection")
+  );
+}
+
+/**
+ * The last middleware: every failure becomes the JSON error shape of DESIGN.md §3.
+ * Unexpected errors are logged with their stack on the server and never sent to the client.
+ */
+export function errorHandler(log: (message: string, err: unknown) => void): ErrorRequestHandler {
+  return (err, req, res, _next) => {
+    if (res.headersSent) return;
+    if (err instanceof HttpError) {
+      for (const [name, value] of Object.entries(err.headers ?? {})) res.setHeader(name, value);
+      res.status(err.status).json({ error: { code: err.code, message: err.message, fields: err.fields } });
+      return;
+    }
+    // body-parser and multer report client mistakes with a status of 4xx.
+    const status = (err as { status?: number; statusCode?: number }).status ?? (err as { statusCode?: number }).statusCode;
+    if (typeof status === "number" && status >= 400 && status < 500) {
+      const code = (err as { type?: string }).type === "entity.too.large" ? "payload_too_large" : "bad_request";
+      const message = code === "payload_too_large" ? "The request is too large." : "The request could not be read.";
+      res.status(status).json({ error: { code, message } });
+      return;
+    }
+    if (isDatabaseUnavailable(err)) {
+      res.setHeader("Retry-After", "5");
+      res.status(503).json({ error: { code: "unavailable", message: "The service is busy or restarting. Try again in a few seconds." } });
+      return;
+    }
+    log(`unhandled error on ${req.method} ${req.originalUrl}`, err);
+    res.status(500).json({ error: { code: "internal", message: "Something went wrong on our side. Please try again." } });
+  };
+}

@@ -1,0 +1,87 @@
+import { Router, type Request, type Response, type NextFunction } from "express";
+import type { z } from "zod";
+import type { Role } from "#shared/schemas/auth";
+import { HttpError, fieldErrors } from "./errors.ts";
+import type { SessionUser } from "../auth/session-user.ts";
+
+/**
+ * Who may call a route. "public" needs nothing; "signed_in" any active account;
+ * a role list, only those roles. Every route declares this next to its path so the
+ * authorisation matrix can be generated from the route table.
+ */
+export type Access = "public" | "signed_in" | readonly Role[];
+
+type Schema = z.ZodType;
+type Infer<S> = S extends Schema ? z.infer<S> : undefined;
+
+export type RouteContext<P, Q, B> = {
+  req: Request;
+  res: Response;
+  params: P;
+  query: Q;
+  body: B;
+  /** The signed-in person; present whenever access is not "public". */
+  user: SessionUser;
+};
+
+export type RouteSpec<PS extends Schema | undefined = Schema | undefined, QS extends Schema | undefined = Schema | undefined, BS extends Schema | undefined = Schema | undefined> = {
+  method: "get" | "post" | "put" | "patch" | "delete";
+  path: string;
+  access: Access;
+  params?: PS;
+  query?: QS;
+  body?: BS;
+  /** Extra middleware before validation (e.g. multipart parsing). */
+  before?: ((req: Request, res: Response, next: NextFunction) => void)[];
+  handler: (ctx: RouteContext<Infer<PS>, Infer<QS>, Infer<BS>>) => Promise<unknown> | unknown;
+};
+
+/** Identity function that keeps the schema types flowing into the handler. */
+export function route<PS extends Schema | undefined = undefined, QS extends Schema | undefined = undefined, BS extends Schema | undefined = undefined>(
+  spec: RouteSpec<PS, QS, BS>,
+): RouteSpec {
+  return spec as unknown as RouteSpec;
+}
+
+function parsePart(schema: Schema | undefined, value: unknown, part: string) {
+  if (!schema) return undefined;
+  const result = schema.safeParse(value ?? {});
+  if (!result.success) {
+    throw new HttpError(400, "invalid_input", "Some of the information is not valid.", fieldErrors(result.error, part === "body" ? undefined : part));
+  }
+  return result.data;
+}
+
+export function checkAccess(access: Access, user: SessionUser | undefined): asserts user is SessionUser {
+  if (access === "public") return;
+  if (!user) throw new HttpError(401, "unauthenticated", "Please sign in first.");
+  if (access === "signed_in") return;
+  if (!access.includes(user.role)) throw new HttpError(403, "forbidden", "Your account cannot do this.");
+}
+
+/**
+ * Mounts route specs on a router. Handlers return the response body (sent as JSON with 200,
+ * or the status they set), or undefined after sending the response themselves.
+ */
+export function buildRouter(specs: readonly RouteSpec[]): Router {
+  const router = Router();
+  for (const spec of specs) {
+    router[spec.method](spec.path, ...(spec.before ?? []), async (req: Request, res: Response) => {
+      const user = req.user as SessionUser | undefined;
+      checkAccess(spec.access, user);
+      const ctx = {
+        req,
+        res,
+        user: user as SessionUser,
+        params: parsePart(spec.params, req.params, "params"),
+        query: parsePart(spec.query, req.query, "query"),
+        body: parsePart(spec.body, req.body, "body"),
+      };
+      const result = await spec.handler(ctx as never);
+      if (res.headersSent) return;
+      if (result === undefined) res.status(204).end();
+      else res.json(result);
+    });
+  }
+  return router;
+}
