@@ -4,11 +4,12 @@ import { authRoutes } from "./features/auth/routes.ts";
 import { healthRoutes } from "./features/health/routes.ts";
 import { devOutboxRoutes } from "./features/dev-outbox/routes.ts";
 import { propertyRoutes } from "./features/properties/routes.ts";
+import { companyRoutes } from "./features/company/routes.ts";
 
 /**
  * The server's whole API route table. The authorisation matrix test reads it, so a
  * route added here without an expectation there fails that test.
  */
 export function collectRoutes(deps: AppDeps): RouteSpec[] {
-  return [...healthRoutes(deps.db), ...authRoutes(deps), ...propertyRoutes(deps.db), ...devOutboxRoutes(deps.config)];
+  return [...healthRoutes(deps.db), ...companyRoutes(deps.db), ...authRoutes(deps), ...propertyRoutes(deps.db), ...devOutboxRoutes(deps.config)];
 }

@@ -1,0 +1,47 @@
+import { zodResolver } from "@hookform/resolvers/zod";
+import { useState } from "react";
+import { useForm } from "react-hook-form";
+import { signInLinkRequestSchema, type SignInLinkRequest } from "#shared/schemas/auth";
+import { Button, Notice, TextField, applyServerErrors } from "#shared/ui/index";
+import { useRequestSignInLink } from "../api/request-link.ts";
+
+export interface RequestLinkFormProps {
+  defaultContact?: string;
+  onSent: (contact: string) => void;
+}
+
+export function RequestLinkForm({ defaultContact = "", onSent }: RequestLinkFormProps) {
+  const requestLink = useRequestSignInLink();
+  const [formError, setFormError] = useState<string | null>(null);
+  const form = useForm<SignInLinkRequest>({
+    resolver: zodResolver(signInLinkRequestSchema),
+    defaultValues: { contact: defaultContact },
+  });
+
+  const onSubmit = form.handleSubmit((values) => {
+    setFormError(null);
+    requestLink.mutate(values, {
+      onSuccess: () => onSent(values.contact),
+      onError: (error) => setFormError(applyServerErrors(error, form.setError, ["contact"])),
+    });
+  });
+
+  return (
+    <form onSubmit={onSubmit} noValidate className="flex flex-col gap-5">
+      <TextField
+        label="E-mail address or mobile number"
+        hint="Use the one your lawn-care company has for you."
+        autoComplete="username"
+        inputMode="email"
+        autoCapitalize="none"
+        spellCheck={false}
+        error={form.formState.errors.contact?.message}
+        {...form.register("contact")}
+      />
+      {formError && <Notice tone="danger">{formError}</Notice>}
+      <Button type="submit" pending={requestLink.isPending} pendingLabel="Sending your link…" className="w-full sm:w-auto sm:self-start">
+        Send me a sign-in link
+      </Button>
+    </form>
+  );
+}

@@ -1,0 +1,22 @@
+/**
+ * UI pieces shared by the portal and the staff app. Import from "#shared/ui/index":
+ * the "#shared/*" subpath maps to ".ts" files, so this barrel is how .tsx components are reached.
+ */
+export { apiFetch, ApiRequestError, isApiRequestError, errorMessage, type ApiFetchOptions, type HttpMethod } from "./api-client.ts";
+export { createQueryClient } from "./query-client.ts";
+export { applyServerErrors } from "./form-errors.ts";
+export { useDocumentTitle } from "./use-document-title.ts";
+export { AppShell, type AppShellProps, type NavItem } from "./app-shell.tsx";
+export { Page, type PageProps } from "./page.tsx";
+export { Button, buttonClasses, Spinner, type ButtonProps, type ButtonVariant } from "./button.tsx";
+export { TextField, type TextFieldProps } from "./field.tsx";
+export { Notice, type NoticeProps, type NoticeTone } from "./notice.tsx";
+export { LoadingState, ErrorState, EmptyState, type ErrorStateProps, type EmptyStateProps } from "./states.tsx";
+export { LinkifiedText, safeHttpUrl, splitLinks, type TextPart } from "./linkified-text.tsx";
+export { SproutMark } from "./sprout-mark.tsx";
+export { meQueryKey, meQueryOptions, getMe, useMe, useSignedInUser, firstName } from "./session/get-me.ts";
+export { useSignOut } from "./session/sign-out.ts";
+export { RequireSignIn, type RequireSignInProps } from "./session/require-sign-in.tsx";
+export { roleLabel } from "./role-label.ts";
+export { SignOutButton } from "./session/sign-out-button.tsx";
+export { NotFoundPage, RouteErrorPage } from "./route-error.tsx";

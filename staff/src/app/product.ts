@@ -1,0 +1,2 @@
+/** The staff app's name in the header and in every tab title. */
+export const productLabel = "Sproutline Staff";
