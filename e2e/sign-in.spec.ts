@@ -1,14 +1,15 @@
 import { expect, test } from "@playwright/test";
-import { expectNoSeriousA11yViolations, signInHomeownerThroughOutbox, signInStaff } from "./support.ts";
+import { chooseGoogleAccount, expectNoSeriousA11yViolations, signInHomeownerThroughOutbox, signInStaff } from "./support.ts";
 
 test("a homeowner signs in with a link read from the outbox and lands on their home page", async ({ browser, page }) => {
   await signInHomeownerThroughOutbox(browser, page, "ruth.okonkwo@mail.example");
   await expect(page.getByRole("heading", { level: 1 })).toHaveText("Hello, Ruth");
-  await expect(page.getByText("Cobblefield Turf Care")).toBeVisible();
+  await expect(page.getByText("Your care plan from Cobblefield Turf Care")).toBeVisible();
   await expectNoSeriousA11yViolations(page);
 
-  // The link works once: opening it again explains and offers a new one.
   await page.getByRole("button", { name: /sign out/i }).first().click();
+  await page.waitForURL(/\/portal\/sign-in/);
+  await page.goto("/portal/");
   await page.waitForURL(/\/portal\/sign-in/);
 });
 
@@ -25,7 +26,7 @@ test("a manager signs in and the role says manager", async ({ page }) => {
 });
 
 test("someone not on the staff list is refused with a clear page", async ({ page }) => {
-  await signInStaff(page, "visitor@elsewhere.example").catch(() => {});
+  await chooseGoogleAccount(page, "visitor@elsewhere.example");
   await expect(page).toHaveURL(/\/staff\/sign-in\?error=not_staff/);
   await expect(page.getByText(/isn.t on the staff list of Cobblefield Turf Care/i)).toBeVisible();
   await expectNoSeriousA11yViolations(page);
