@@ -14,7 +14,7 @@ const envSchema = z
     TRUST_PROXY: z.coerce.number().int().min(0).default(0),
 
     SMTP_HOST: z.string().default("127.0.0.1"),
-    SMTP_PORT: z.coerce.number().int().default(2525),
+    SMTP_PORT: z.coerce.number().int().default(5183),
     SMTP_SECURE: z.stringbool().default(false),
     SMTP_USER: z.string().optional(),
     SMTP_PASSWORD: z.string().optional(),

@@ -3,7 +3,7 @@ import { demoStaff } from "../../seeds/data/demo-company.ts";
 import { fakeDefaults, type StartFakesOptions } from "./index.ts";
 
 /** Fixed ports matching scripts/lib/ports.ts (runPorts), so `tsx server/fakes/main.ts` fits `npm run dev`. */
-const defaultPorts = { sms: 5181, smtp: 2525, oauth: 5182 };
+const defaultPorts = { sms: 5181, smtp: 5183, oauth: 5182 };
 
 /** The seeded staff plus someone who is not on staff, to try the refusal path. */
 const defaultAccounts = [

@@ -57,7 +57,7 @@ describe("readFakesEnv", () => {
   it("has defaults that match the app's own defaults", () => {
     const options = readFakesEnv({});
     expect(options.sms).toMatchObject({ port: 5181, accountSid: "AC00000000000000000000000000000000", authToken: "local-fake-auth-token", inboundWebhookUrl: null });
-    expect(options.smtp).toEqual({ port: 2525 });
+    expect(options.smtp).toEqual({ port: 5183 });
     expect(options.oauth).toMatchObject({ port: 5182, clientId: "sproutline-local-client", clientSecret: "sproutline-local-secret" });
     expect(options.oauth?.accounts?.length).toBeGreaterThan(1);
   });
