@@ -48,7 +48,7 @@ export async function seed(knex: Knex): Promise<void> {
           lawn: JSON.stringify(c.lawn),
         })
         .onConflict(["customer_id", "label"])
-        .merge(["street", "lawn", "lawn_area_ft2"]);
+        .merge(["street", "lawn_area_ft2"]);
     }
   });
 }

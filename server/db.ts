@@ -2,6 +2,12 @@ import knex, { type Knex } from "knex";
 import { readdirSync } from "node:fs";
 import { resolve } from "node:path";
 import { pathToFileURL } from "node:url";
+import pg from "pg";
+
+// Plan dates are calendar dates in the lawn's own zone: keep PostgreSQL `date` values as
+// "YYYY-MM-DD" strings instead of letting the driver turn them into instants.
+const PG_DATE_OID = 1082;
+pg.types.setTypeParser(PG_DATE_OID, (value) => value);
 
 export type Db = Knex;
 

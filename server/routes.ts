@@ -5,11 +5,13 @@ import { healthRoutes } from "./features/health/routes.ts";
 import { devOutboxRoutes } from "./features/dev-outbox/routes.ts";
 import { propertyRoutes } from "./features/properties/routes.ts";
 import { companyRoutes } from "./features/company/routes.ts";
+import { planRoutes } from "./features/plans/routes.ts";
+import { visitRoutes } from "./features/visits/routes.ts";
 
 /**
  * The server's whole API route table. The authorisation matrix test reads it, so a
  * route added here without an expectation there fails that test.
  */
 export function collectRoutes(deps: AppDeps): RouteSpec[] {
-  return [...healthRoutes(deps.db), ...companyRoutes(deps.db), ...authRoutes(deps), ...propertyRoutes(deps.db), ...devOutboxRoutes(deps.config)];
+  return [...healthRoutes(deps.db), ...companyRoutes(deps.db), ...authRoutes(deps), ...propertyRoutes(deps.db), ...planRoutes(deps), ...visitRoutes(deps), ...devOutboxRoutes(deps.config)];
 }

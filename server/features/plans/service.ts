@@ -1,0 +1,104 @@
+import { generatePlan, parsePlanInput, recomputePlan, type Observation, type Plan, type PlanInputRaw, type ProgramSettings } from "#shared/engine/index";
+import type { StoredPlan, TodayResponse } from "#shared/schemas/plans";
+import type { Db } from "../../db.ts";
+import { HttpError, notFound } from "../../http/errors.ts";
+import { localDateAt } from "../../lib/local-date.ts";
+import { loadVisitWithProperty, type VisitWithProperty } from "../visits/repo.ts";
+import { currentProgram, programVersion } from "./program-repo.ts";
+import * as plans from "./plans-repo.ts";
+import * as steps from "./steps-repo.ts";
+
+/** Runs after every change to a plan's steps, inside the same transaction (e.g. to reschedule reminders). */
+export type PlanChangeHook = (trx: Db, planId: number) => Promise<void>;
+
+export function engineInput(visit: VisitWithProperty, program: ProgramSettings, options: PlanInputRaw["options"] = {}): PlanInputRaw {
+  return {
+    visit: { date: visit.visitDate, services: visit.services, ...visit.details } as PlanInputRaw["visit"],
+    property: { ...visit.lawn, timeZone: visit.timeZone } as PlanInputRaw["property"],
+    program,
+    options,
+  };
+}
+
+/** Validates an input assembled from stored records; a failure means the records need fixing, not the user's form. */
+function parseStored(raw: PlanInputRaw) {
+  const parsed = parsePlanInput(raw);
+  if (!parsed.ok) {
+    throw new HttpError(422, "plan_input_invalid", "The visit or property details can't make a care plan yet. Fix the fields listed.", parsed.fields);
+  }
+  return parsed.value;
+}
+
+/** Creates the care plan of a visit and all its steps; call inside the visit's transaction. */
+export async function createPlanForVisit(trx: Db, visitId: number, onChange?: PlanChangeHook): Promise<{ planId: number; plan: Plan }> {
+  const visit = await loadVisitWithProperty(trx, visitId);
+  if (!visit) throw notFound("That visit");
+  const program = await currentProgram(trx, visit.companyId);
+  const raw = engineInput(visit, program);
+  const plan = generatePlan(parseStored(raw));
+  const planId = await plans.insertPlan(trx, { propertyId: visit.propertyId, visitId, input: raw, plan });
+  await steps.syncSteps(trx, planId, [...plan.prepSteps, ...plan.steps]);
+  await onChange?.(trx, planId);
+  return { planId, plan };
+}
+
+/**
+ * Recomputes a plan from its visit as it is now (date moved, observations added), keeping
+ * the program version it was made from and every step already done or skipped. The same
+ * call twice leaves the same rows.
+ */
+export async function regeneratePlan(db: Db, planId: number, change: { observation?: Observation } = {}, onChange?: PlanChangeHook): Promise<void> {
+  await db.transaction(async (trx) => {
+    // Serialises concurrent regenerations of one plan across server processes.
+    const locked = await trx("care_plans").where({ id: planId }).forUpdate().first<{ visit_id: number; program_version: number; observations: Observation[] } | undefined>("visit_id", "program_version", "observations");
+    if (!locked) throw notFound("That care plan");
+    const visit = await loadVisitWithProperty(trx, locked.visit_id);
+    if (!visit) throw notFound("That visit");
+    const program = (await programVersion(trx, visit.companyId, locked.program_version)) ?? (await currentProgram(trx, visit.companyId));
+    const observations = change.observation ? [...locked.observations, change.observation] : locked.observations;
+    const today = localDateAt(visit.timeZone);
+    const raw = engineInput(visit, program, { today, observations });
+    const input = parseStored(raw);
+    const previous = (await steps.stepsOfPlan(trx, planId)).map(steps.toEngineStep);
+    const plan = recomputePlan({ steps: previous.filter((s) => s.phase !== "prep"), prepSteps: previous.filter((s) => s.phase === "prep") }, input, today);
+    await plans.updatePlan(trx, planId, raw, plan, observations);
+    await steps.syncSteps(trx, planId, [...plan.prepSteps, ...plan.steps]);
+    await onChange?.(trx, planId);
+  });
+}
+
+export async function loadStoredPlan(db: Db, planId: number): Promise<StoredPlan> {
+  const row = await plans.loadPlanRow(db, planId);
+  if (!row) throw notFound("That care plan");
+  const stepRows = await steps.stepsOfPlan(db, planId);
+  const { meta, summary, cautions } = row.figures;
+  return {
+    ...plans.toHeader(row),
+    phases: meta.phases.map((p) => ({ ...p })),
+    firstMowDate: meta.firstMowDate,
+    holdOffs: row.hold_offs.map((h) => ({ ...h, cautions: [...h.cautions] })),
+    warnings: [...row.warnings],
+    cautions: cautions.map((c) => ({ ...c })),
+    figures: summary as unknown as Record<string, unknown>,
+    steps: stepRows.map(steps.toStoredStep),
+  };
+}
+
+const milestoneKinds = new Set(["mow", "check_in_photo", "feed"]);
+
+/** Today's steps, active hold-offs and the next milestone, in the lawn's own time zone. */
+export async function todayView(db: Db, planId: number, now = new Date()): Promise<TodayResponse> {
+  const plan = await loadStoredPlan(db, planId);
+  const today = localDateAt(plan.timeZone, now);
+  const upcoming = plan.steps.find((s) => s.date > today && milestoneKinds.has(s.kind));
+  const { steps: allSteps, holdOffs, warnings, cautions, phases: _p, firstMowDate: _f, figures: _g, ...header } = plan;
+  return {
+    today,
+    plan: header,
+    steps: allSteps.filter((s) => s.date === today),
+    activeHoldOffs: holdOffs.filter((h) => h.start <= today && today <= h.end),
+    nextMilestone: upcoming ? { kind: upcoming.kind, date: upcoming.date, title: upcoming.title } : null,
+    warnings,
+    cautions,
+  };
+}
