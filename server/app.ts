@@ -7,6 +7,7 @@ import { createPassport } from "./auth/passport.ts";
 import { apiNotFound, errorHandler } from "./http/errors.ts";
 import { securityHeaders } from "./web/security-headers.ts";
 import { buildRouter } from "./http/route.ts";
+import { requireSameOrigin } from "./http/same-origin.ts";
 import { collectRoutes } from "./routes.ts";
 import { googleSignInRouter } from "./features/auth/routes.ts";
 import { serveBuiltApps, serveWithVite } from "./web/serve-apps.ts";
@@ -33,6 +34,7 @@ export async function createApp(deps: AppDeps, web: WebMode = "none"): Promise<B
   app.disable("x-powered-by");
   app.set("trust proxy", config.TRUST_PROXY);
   app.use(securityHeaders(config.NODE_ENV === "development"));
+  app.use(requireSameOrigin(config.PUBLIC_URL));
   app.use(express.json({ limit: "100kb" }));
   app.use(express.urlencoded({ extended: false, limit: "100kb" }));
 
