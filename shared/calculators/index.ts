@@ -1,0 +1,20 @@
+export { CalculatorInputError } from "./errors.ts";
+export * from "./units.ts";
+export { pureLiveSeed, bulkSeedNeeded, seedsPerSqFt } from "./seed.ts";
+export {
+  productPerThousand,
+  totalProduct,
+  bagsNeeded,
+  nutrientsDelivered,
+  validateAnalysis,
+  type NpkAnalysis,
+  type NutrientAmounts,
+  type NutrientsDelivered,
+} from "./fertiliser.ts";
+export {
+  CATCH_CAN_CONSTANT,
+  openingAreaIn2,
+  precipitationRateInPerHour,
+  lowQuarterDU,
+  minutesPerCycle,
+} from "./irrigation.ts";

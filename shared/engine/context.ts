@@ -1,0 +1,107 @@
+import { fromDayNumber, toDayNumber, type IsoDate } from "./dates.ts";
+import { mixFacts, type MixFacts } from "./mix.ts";
+import { SEEDING_SERVICES, type PlanInput, type Service } from "./schemas/plan-input.ts";
+import type { ProgramSettings } from "./schemas/program-settings.ts";
+import { dateOfKey } from "./step-keys.ts";
+import { SPECIES_FACTS, type Season } from "./tables/species.ts";
+import { hemisphereOfZone, type Hemisphere } from "./tables/timing.ts";
+import { computeTimeline, phaseOfDay, type Timeline } from "./timeline.ts";
+import type { Phase } from "./types.ts";
+import { zoneClock, type ZoneClock } from "./zone-time.ts";
+
+/** Everything the rule modules need, worked out once per plan. */
+export interface PlanContext {
+  readonly input: PlanInput;
+  readonly program: ProgramSettings;
+  readonly visitDay: number;
+  readonly zone: string;
+  readonly hemisphere: Hemisphere;
+  readonly services: ReadonlySet<Service>;
+  /** Seed went down: a seeding service, or seed logged without one. */
+  readonly seeding: boolean;
+  readonly mix: MixFacts | null;
+  readonly lawnSeason: Season | "mixed";
+  readonly precipitationRate: number;
+  readonly precipitationRateMeasured: boolean;
+  readonly rainDays: ReadonlySet<number>;
+  readonly skippedKeys: ReadonlySet<string>;
+  readonly sproutsSeenDay: number | null;
+  readonly frostDay: number | null;
+  readonly timeline: Timeline;
+  /** DST gaps of the zone over the plan's dates, for checking watering times. */
+  readonly clock: ZoneClock;
+  /** ISO date of a day offset from the visit. */
+  dateOf(dayOffset: number): IsoDate;
+  phaseOf(dayOffset: number): Phase;
+}
+
+function lawnSeasonOf(input: PlanInput): Season | "mixed" {
+  if (input.property.grassType.season) return input.property.grassType.season;
+  const seasons = new Set(input.property.grassType.species.map((s) => SPECIES_FACTS[s].season));
+  if (seasons.size === 1) return seasons.has("warm") ? "warm" : "cool";
+  return "mixed";
+}
+
+export function buildContext(input: PlanInput): PlanContext {
+  const { visit, property, program, options } = input;
+  const visitDay = toDayNumber(visit.date);
+  const services = new Set(visit.services);
+  const seeding = visit.seedMix.length > 0 || visit.services.some((s) => SEEDING_SERVICES.includes(s));
+  const mix = seeding ? mixFacts(visit.seedMix) : null;
+
+  let sproutsSeenDay: number | null = null;
+  const rainDays = new Set<number>();
+  const skippedKeys = new Set<string>();
+  for (const observation of options.observations) {
+    if (observation.kind === "sprouts_seen") {
+      sproutsSeenDay = sproutsSeenDay === null ? observation.onDay : Math.min(sproutsSeenDay, observation.onDay);
+    } else if (observation.kind === "heavy_rain") {
+      rainDays.add(toDayNumber(observation.date));
+    } else {
+      skippedKeys.add(observation.stepKey);
+    }
+  }
+
+  const base = computeTimeline(program, mix, { sproutsSeenDay, skippedGerminationWateringDays: 0 });
+  const skippedGerminationWateringDays = countSkippedWateringDays(skippedKeys, visitDay, base.germinationEnd);
+  const timeline =
+    skippedGerminationWateringDays === 0
+      ? base
+      : computeTimeline(program, mix, { sproutsSeenDay, skippedGerminationWateringDays });
+
+  return {
+    input,
+    program,
+    visitDay,
+    zone: property.timeZone,
+    hemisphere: property.hemisphere ?? hemisphereOfZone(property.timeZone),
+    services,
+    seeding,
+    mix,
+    lawnSeason: lawnSeasonOf(input),
+    precipitationRate: property.irrigation.precipitationRateInPerHour ?? program.defaultPrecipitationRateInPerHour,
+    precipitationRateMeasured: property.irrigation.precipitationRateInPerHour !== undefined,
+    rainDays,
+    skippedKeys,
+    sproutsSeenDay,
+    frostDay: property.expectedFirstFrost ? toDayNumber(property.expectedFirstFrost) - visitDay : null,
+    timeline,
+    clock: zoneClock(property.timeZone, visitDay, visitDay + timeline.planEnd),
+    dateOf: (dayOffset) => fromDayNumber(visitDay + dayOffset),
+    phaseOf: (dayOffset) => phaseOfDay(timeline, dayOffset),
+  };
+}
+
+/** Distinct germination days with a skipped watering (a day counts once however many cycles were skipped). */
+function countSkippedWateringDays(skippedKeys: ReadonlySet<string>, visitDay: number, germinationEnd: number | null): number {
+  if (germinationEnd === null) return 0;
+  const days = new Set<number>();
+  for (const key of skippedKeys) {
+    if (!key.startsWith("water:")) continue;
+    const date = dateOfKey(key);
+    if (date === null) continue;
+    const offset = toDayNumber(date) - visitDay;
+    if (offset >= 1 && offset <= germinationEnd) days.add(offset);
+  }
+  return days.size;
+}

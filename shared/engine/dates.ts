@@ -1,0 +1,111 @@
+/*
+ * Plan dates are calendar dates in the property's own zone ("YYYY-MM-DD").
+ * All arithmetic is done on whole day numbers (days since 1970-01-01 in the
+ * proleptic Gregorian calendar) and never through `Date` objects, so a DST
+ * change, the server's zone or UTC can never push a step onto the wrong day.
+ * Algorithms: Howard Hinnant, "chrono-Compatible Low-Level Date Algorithms".
+ */
+
+export type IsoDate = string;
+
+const ISO_DATE = /^(\d{4})-(\d{2})-(\d{2})$/;
+const LOCAL_TIME = /^([01]\d|2[0-3]):([0-5]\d)$/;
+
+export function isLeapYear(year: number): boolean {
+  return (year % 4 === 0 && year % 100 !== 0) || year % 400 === 0;
+}
+
+export function daysInMonth(year: number, month: number): number {
+  if (month === 2) return isLeapYear(year) ? 29 : 28;
+  return [4, 6, 9, 11].includes(month) ? 30 : 31;
+}
+
+export function isValidIsoDate(value: unknown): value is IsoDate {
+  if (typeof value !== "string") return false;
+  const match = ISO_DATE.exec(value);
+  if (!match) return false;
+  const month = Number(match[2]);
+  const day = Number(match[3]);
+  return month >= 1 && month <= 12 && day >= 1 && day <= daysInMonth(Number(match[1]), month);
+}
+
+export function daysFromCivil(year: number, month: number, day: number): number {
+  const y = month <= 2 ? year - 1 : year;
+  const era = Math.floor(y / 400);
+  const yearOfEra = y - era * 400;
+  const dayOfYear = Math.floor((153 * (month + (month > 2 ? -3 : 9)) + 2) / 5) + day - 1;
+  const dayOfEra = yearOfEra * 365 + Math.floor(yearOfEra / 4) - Math.floor(yearOfEra / 100) + dayOfYear;
+  return era * 146097 + dayOfEra - 719468;
+}
+
+export function civilFromDays(dayNumber: number): { year: number; month: number; day: number } {
+  const z = dayNumber + 719468;
+  const era = Math.floor(z / 146097);
+  const dayOfEra = z - era * 146097;
+  const yearOfEra = Math.floor(
+    (dayOfEra - Math.floor(dayOfEra / 1460) + Math.floor(dayOfEra / 36524) - Math.floor(dayOfEra / 146096)) / 365,
+  );
+  const dayOfYear = dayOfEra - (365 * yearOfEra + Math.floor(yearOfEra / 4) - Math.floor(yearOfEra / 100));
+  const mp = Math.floor((5 * dayOfYear + 2) / 153);
+  const day = dayOfYear - Math.floor((153 * mp + 2) / 5) + 1;
+  const month = mp < 10 ? mp + 3 : mp - 9;
+  return { year: yearOfEra + era * 400 + (month <= 2 ? 1 : 0), month, day };
+}
+
+/** Throws on malformed input: callers pass dates that zod has already checked. */
+export function toDayNumber(date: IsoDate): number {
+  const match = ISO_DATE.exec(date);
+  const year = Number(match?.[1]);
+  const month = Number(match?.[2]);
+  const day = Number(match?.[3]);
+  if (!match || month < 1 || month > 12 || day < 1 || day > daysInMonth(year, month)) {
+    throw new RangeError(`Not a calendar date: ${date}`);
+  }
+  return daysFromCivil(year, month, day);
+}
+
+const pad2 = (n: number) => (n < 10 ? `0${n}` : String(n));
+
+/*
+ * Plans reuse the same few thousand dates, so their texts are memoised
+ * (bounded; pure, since a day number always names the same date).
+ */
+const isoTextByDay = new Map<number, IsoDate>();
+const MAX_MEMOISED_DATES = 100_000;
+
+export function fromDayNumber(dayNumber: number): IsoDate {
+  let text = isoTextByDay.get(dayNumber);
+  if (text === undefined) {
+    const { year, month, day } = civilFromDays(dayNumber);
+    text = `${String(year).padStart(4, "0")}-${pad2(month)}-${pad2(day)}`;
+    if (isoTextByDay.size < MAX_MEMOISED_DATES) isoTextByDay.set(dayNumber, text);
+  }
+  return text;
+}
+
+export function addDays(date: IsoDate, days: number): IsoDate {
+  return fromDayNumber(toDayNumber(date) + days);
+}
+
+/** Whole calendar days from `from` to `to` (positive when `to` is later). */
+export function daysBetween(from: IsoDate, to: IsoDate): number {
+  return toDayNumber(to) - toDayNumber(from);
+}
+
+export function monthOfDayNumber(dayNumber: number): number {
+  return civilFromDays(dayNumber).month;
+}
+
+export function isValidLocalTime(value: unknown): value is string {
+  return typeof value === "string" && LOCAL_TIME.test(value);
+}
+
+export function minutesOfLocalTime(time: string): number {
+  const match = LOCAL_TIME.exec(time);
+  if (!match) throw new RangeError(`Not a local time: ${time}`);
+  return Number(match[1]) * 60 + Number(match[2]);
+}
+
+export function localTimeFromMinutes(minutes: number): string {
+  return `${pad2(Math.floor(minutes / 60))}:${pad2(minutes % 60)}`;
+}

@@ -1,0 +1,30 @@
+const inchesText = new Map<number, string>();
+
+/** Plain numbers for homeowner text: "3 in", "2.5 in", "2.25 in". Mower heights repeat, so texts are memoised. */
+export function formatInches(value: number): string {
+  let text = inchesText.get(value);
+  if (text === undefined) {
+    text = `${Number(value.toFixed(2))} in`;
+    if (inchesText.size < 1000) inchesText.set(value, text);
+  }
+  return text;
+}
+
+/** "21.4", "6,000": fixed US-style grouping so output never depends on the host's locale. */
+export function formatNumber(value: number, decimals = 1): string {
+  const text = String(Number(value.toFixed(decimals)));
+  const dot = text.indexOf(".");
+  const whole = dot === -1 ? text : text.slice(0, dot);
+  const sign = whole.startsWith("-") ? "-" : "";
+  const digits = sign ? whole.slice(1) : whole;
+  let grouped = "";
+  for (let i = 0; i < digits.length; i++) {
+    if (i > 0 && (digits.length - i) % 3 === 0) grouped += ",";
+    grouped += digits[i];
+  }
+  return sign + grouped + (dot === -1 ? "" : text.slice(dot));
+}
+
+export function plural(count: number, one: string, many: string): string {
+  return count === 1 ? one : many;
+}

@@ -1,0 +1,90 @@
+import { buildContext, type PlanContext } from "./context.ts";
+import { checkInSteps } from "./rules/check-ins.ts";
+import { feedingSteps } from "./rules/feeding.ts";
+import { holdOffEndSteps, holdOffsFor, holdOffWindows } from "./rules/hold-offs.ts";
+import { mowingSteps } from "./rules/mowing.ts";
+import { prepSteps } from "./rules/prep.ts";
+import { leafCleanupSteps, thatchCleanupSteps } from "./rules/seasonal.ts";
+import { planWarnings } from "./rules/warnings.ts";
+import { wateringSteps } from "./rules/watering.ts";
+import { hashInput } from "./hash.ts";
+import type { PlanInput } from "./schemas/plan-input.ts";
+import { sortSteps } from "./steps.ts";
+import { calculatorSummary } from "./summary.ts";
+import { CAUTION_IDS, CAUTIONS, type CautionId } from "./tables/cautions.ts";
+import type { HoldOff, PhaseRange, Plan, PlanStep } from "./types.ts";
+
+/** Bump when the same input would produce a different plan, so stored plans can be told apart. */
+export const ENGINE_VERSION = 1;
+
+/** Steps the homeowner reported skipping keep their place in the plan, marked skipped. */
+function applySkips(ctx: PlanContext, steps: PlanStep[]): PlanStep[] {
+  if (ctx.skippedKeys.size === 0) return steps;
+  return steps.map((s) => (ctx.skippedKeys.has(s.key) && s.state === undefined ? { ...s, state: "skipped" } : s));
+}
+
+function phaseRanges(ctx: PlanContext, prep: readonly PlanStep[]): PhaseRange[] {
+  const { timeline } = ctx;
+  const ranges: PhaseRange[] = [];
+  const first = prep[0];
+  if (first) ranges.push({ phase: "prep", start: first.date, end: ctx.dateOf(-1) });
+  let next = 0;
+  if (timeline.germinationEnd !== null) {
+    ranges.push({ phase: "germination", start: ctx.dateOf(0), end: ctx.dateOf(timeline.germinationEnd) });
+    next = timeline.germinationEnd + 1;
+  }
+  ranges.push({ phase: "establishment", start: ctx.dateOf(next), end: ctx.dateOf(timeline.establishmentEnd) });
+  ranges.push({ phase: "maturing", start: ctx.dateOf(timeline.establishmentEnd + 1), end: ctx.dateOf(timeline.planEnd) });
+  return ranges;
+}
+
+function cautionsUsed(groups: readonly (readonly { cautions: readonly CautionId[] }[])[]): Plan["cautions"] {
+  const used = new Set<CautionId>();
+  for (const group of groups) for (const item of group) for (const id of item.cautions) used.add(id);
+  return CAUTION_IDS.filter((id) => used.has(id)).map((id) => ({ id, text: CAUTIONS[id].text }));
+}
+
+/**
+ * The care plan for one visit. Pure and deterministic: it reads no clock and
+ * no zone but the property's, so the same (already validated) input always
+ * gives a deep-equal plan. Validate untrusted input with parsePlanInput first.
+ */
+export function generatePlan(input: PlanInput): Plan {
+  const ctx = buildContext(input);
+  const windows = holdOffWindows(ctx);
+  const holdOffs: HoldOff[] = holdOffsFor(ctx, windows);
+  const prep = sortSteps(applySkips(ctx, prepSteps(ctx)));
+  const steps = sortSteps(
+    applySkips(ctx, [
+      ...thatchCleanupSteps(ctx),
+      ...wateringSteps(ctx),
+      ...mowingSteps(ctx),
+      ...feedingSteps(ctx, windows),
+      ...holdOffEndSteps(ctx, windows),
+      ...leafCleanupSteps(ctx),
+      ...checkInSteps(ctx),
+    ]),
+  );
+  const { timeline } = ctx;
+  return {
+    meta: {
+      engineVersion: ENGINE_VERSION,
+      programVersion: input.program.version,
+      inputHash: hashInput(input),
+      visitDate: input.visit.date,
+      timeZone: ctx.zone,
+      hemisphere: ctx.hemisphere,
+      seeding: ctx.seeding,
+      phases: phaseRanges(ctx, prep),
+      firstMowDate: timeline.firstMow === null ? null : ctx.dateOf(timeline.firstMow),
+      germinationWateringEnds: timeline.germinationEnd === null ? null : ctx.dateOf(timeline.germinationEnd),
+      planEnds: ctx.dateOf(timeline.planEnd),
+    },
+    prepSteps: prep,
+    steps,
+    holdOffs,
+    warnings: planWarnings(ctx),
+    summary: calculatorSummary(ctx),
+    cautions: cautionsUsed([prep, steps, holdOffs]),
+  };
+}

@@ -1,0 +1,113 @@
+import { nutrientsDelivered } from "../../calculators/fertiliser.ts";
+import type { PlanContext } from "../context.ts";
+import { formatNumber } from "../format.ts";
+import type { ProductApplied } from "../schemas/plan-input.ts";
+import { oneOffKey } from "../step-keys.ts";
+import { AUTUMN_FEEDING_N, SINGLE_FEEDING_N, STARTER_FEEDING } from "../tables/feeding.ts";
+import { AUTUMN_MONTHS } from "../tables/timing.ts";
+import { monthOfDayNumber } from "../dates.ts";
+import type { PlanStep } from "../types.ts";
+import type { HoldOffWindow } from "./hold-offs.ts";
+
+const FEED_CAUTIONS = ["label_is_law", "children_pets", "phosphorus_rules"] as const;
+
+/** A starter is phosphorus-rich: at least as much P as N on the bag. */
+export function isStarterProduct(product: ProductApplied): boolean {
+  return product.analysis.p > 0 && product.analysis.p >= product.analysis.n;
+}
+
+/**
+ * "High-N quick-release": flagged quick-release and nitrogen the largest of
+ * the three grades. The references give no percentage threshold, so the
+ * bag's own balance decides rather than an invented cut-off.
+ */
+export function isHighNQuickRelease(product: ProductApplied): boolean {
+  return product.quickReleaseN === true && product.analysis.n > product.analysis.p && product.analysis.n > product.analysis.k;
+}
+
+export function starterAppliedAtVisit(ctx: PlanContext): boolean {
+  return ctx.services.has("starter_fertiliser") || ctx.input.visit.products.some(isStarterProduct);
+}
+
+export function nitrogenAppliedPer1000(ctx: PlanContext): number {
+  return ctx.input.visit.products.reduce(
+    (sum, p) => sum + nutrientsDelivered(p.analysis, p.rateLbPer1000, ctx.input.visit.areaFt2).perThousand.n,
+    0,
+  );
+}
+
+export function feedingSteps(ctx: PlanContext, windows: readonly HoldOffWindow[]): PlanStep[] {
+  const steps: PlanStep[] = [];
+  const area = ctx.input.visit.areaFt2;
+
+  if (ctx.seeding && !starterAppliedAtVisit(ctx)) {
+    const date = ctx.dateOf(1);
+    steps.push({
+      key: oneOffKey("feed", "starter"),
+      date,
+      phase: ctx.phaseOf(1),
+      kind: "feed",
+      title: "Spread a starter fertiliser on the seeded lawn",
+      detail: `Use a starter (phosphorus-rich) or organic lawn fertiliser, about ${STARTER_FEEDING.minPLbPer1000}–${STARTER_FEEDING.maxPLbPer1000} lb of phosphorus per 1,000 ft² or as the bag says. Not a weed-and-feed. Water lightly afterwards as usual.`,
+      feed: { product: "starter", highNQuickRelease: false },
+      why: {
+        text: "Seedlings need phosphorus to build roots; starter fertiliser puts it where the seed is.",
+        source: STARTER_FEEDING.source,
+        provenance: STARTER_FEEDING.provenance,
+      },
+      cautions: FEED_CAUTIONS,
+    });
+  }
+
+  const highN = windows.find((w) => w.kind === "high_n_quick_release");
+  if (ctx.seeding && highN && highN.endDay + 1 <= ctx.timeline.planEnd) {
+    // The follow-up feed is slow-release, yet it still waits out the high-N
+    // window: a homeowner handed "feed the lawn" may reach for any bag.
+    const day = highN.endDay + 1;
+    const date = ctx.dateOf(day);
+    const n = SINGLE_FEEDING_N.minLbPer1000;
+    steps.push({
+      key: oneOffKey("feed", "follow_up"),
+      date,
+      phase: ctx.phaseOf(day),
+      kind: "feed",
+      title: "Feed the new lawn with a slow-release fertiliser",
+      detail: `Aim for about ${n} lb of nitrogen per 1,000 ft² (${formatNumber((n * area) / 1000)} lb for your ${formatNumber(area, 0)} ft²). Choose slow-release nitrogen, not a weed-and-feed.`,
+      feed: { product: "slow_release_n", highNQuickRelease: false, nitrogenLbPer1000: n },
+      restrictedBy: ["high_n_quick_release"],
+      why: {
+        text: "A light feeding once the seedlings are established helps them thicken before winter or summer stress.",
+        source: SINGLE_FEEDING_N.source,
+        provenance: SINGLE_FEEDING_N.provenance,
+      },
+      cautions: FEED_CAUTIONS,
+    });
+  }
+
+  const autumn = (AUTUMN_MONTHS[ctx.hemisphere] as readonly number[]).includes(monthOfDayNumber(ctx.visitDay));
+  const thick = ctx.input.property.lawnCondition === "thick" || ctx.input.property.lawnCondition === "thick_dormant";
+  if (!ctx.seeding && autumn && thick && ctx.lawnSeason === "cool") {
+    const remaining = AUTUMN_FEEDING_N.totalLbPer1000 - nitrogenAppliedPer1000(ctx);
+    const day = AUTUMN_FEEDING_N.weeksBetweenSplits * 7;
+    if (remaining >= 0.5 && day <= ctx.timeline.planEnd) {
+      const n = Math.min(SINGLE_FEEDING_N.maxLbPer1000, Math.round(remaining * 4) / 4);
+      const date = ctx.dateOf(day);
+      steps.push({
+        key: oneOffKey("feed", "autumn_split"),
+        date,
+        phase: ctx.phaseOf(day),
+        kind: "feed",
+        title: "Give the lawn its second autumn feeding",
+        detail: `About ${n} lb of nitrogen per 1,000 ft² (${formatNumber((n * area) / 1000)} lb for your ${formatNumber(area, 0)} ft²). Follow the bag's rate.`,
+        feed: { product: "slow_release_n", highNQuickRelease: false, nitrogenLbPer1000: n },
+        why: {
+          text: "A thick cool-season lawn stores autumn feeding in its roots; splitting it avoids a flush of soft growth.",
+          source: AUTUMN_FEEDING_N.source,
+          provenance: AUTUMN_FEEDING_N.provenance,
+        },
+        cautions: FEED_CAUTIONS,
+      });
+    }
+  }
+  return steps;
+}

@@ -1,0 +1,80 @@
+import fc from "fast-check";
+import { describe, expect, it } from "vitest";
+import { generatePlan } from "../generate.ts";
+import { valid, withChanges } from "../testing/fixtures.ts";
+import { mowDownStages } from "./prep.ts";
+
+describe("mowDownStages (one-third rule: University of Minnesota Extension #764665; staging: common practice)", () => {
+  it("4 in with ½-inch settings goes 4 → 3 → 2 (2.67 in is the one-third limit, so the next setting up, 3 in)", () => {
+    expect(mowDownStages(4, 2, 0.5)).toEqual([3, 2]);
+  });
+
+  it("3 in goes straight to 2 in (exactly one third)", () => {
+    expect(mowDownStages(3, 2, 0.5)).toEqual([2]);
+  });
+
+  it("with ¼-inch settings 4 in can go to 2.75 in first", () => {
+    expect(mowDownStages(4, 2, 0.25)).toEqual([2.75, 2]);
+  });
+
+  it("does nothing when the lawn is already at or below the target", () => {
+    expect(mowDownStages(2, 2, 0.5)).toEqual([]);
+    expect(mowDownStages(1.5, 2, 0.5)).toEqual([]);
+  });
+
+  it("never removes more than a third in one cut and always goes down, for any height, target and step", () => {
+    fc.assert(
+      fc.property(
+        fc.double({ min: 1, max: 6, noNaN: true }),
+        fc.double({ min: 1, max: 3, noNaN: true }),
+        fc.constantFrom(0.125, 0.25, 0.5, 1),
+        (current, target, step) => {
+          let previous = current;
+          for (const height of mowDownStages(current, target, step)) {
+            expect(height).toBeLessThan(previous);
+            expect(height).toBeGreaterThanOrEqual(target - 1e-9);
+            expect(height).toBeGreaterThanOrEqual(previous * (2 / 3) - 1e-9);
+            previous = height;
+          }
+        },
+      ),
+    );
+  });
+});
+
+describe("prep steps in a plan", () => {
+  it("mows down a week apart, the last cut the day before the visit (4 in → 3 in for about a week → 2 in, common practice)", () => {
+    const plan = generatePlan(valid(withChanges({})));
+    const mows = plan.prepSteps.filter((s) => s.kind === "prep_mow");
+    expect(mows.map((s) => [s.date, s.heightIn])).toEqual([
+      ["2026-09-02", 3],
+      ["2026-09-09", 2],
+    ]);
+  });
+
+  it("assumes ½-inch mower settings when the step is unknown", () => {
+    const raw = withChanges({ property: { mowerSettingStepIn: undefined } });
+    const heights = generatePlan(valid(raw)).prepSteps.filter((s) => s.kind === "prep_mow").map((s) => s.heightIn);
+    expect(heights).toEqual([3, 2]);
+  });
+
+  it("flags sprinkler heads and pet-fence wires before aeration, but not for a feeding-only visit", () => {
+    const aeration = generatePlan(valid(withChanges({})));
+    expect(aeration.prepSteps.find((s) => s.kind === "flag_hazards")?.detail).toMatch(/sprinkler heads.*pet-fence/);
+    const feedOnly = generatePlan(
+      valid(withChanges({ visit: { services: ["fertiliser_only"], seedMix: [], seedRateLbPer1000: undefined } })),
+    );
+    expect(feedOnly.prepSteps).toEqual([]);
+  });
+
+  it("does not mow down a bare lawn for new seeding", () => {
+    const raw = withChanges({ visit: { services: ["new_seeding"] }, property: { lawnCondition: "bare" } });
+    expect(generatePlan(valid(raw)).prepSteps.filter((s) => s.kind === "prep_mow")).toEqual([]);
+  });
+
+  it("after dethatching without seed, adds a rake-up-the-thatch step on the visit day", () => {
+    const raw = withChanges({ visit: { services: ["dethatching"], seedMix: [], seedRateLbPer1000: undefined } });
+    const thatch = generatePlan(valid(raw)).steps.find((s) => s.kind === "clear_debris");
+    expect(thatch?.date).toBe("2026-09-10");
+  });
+});

@@ -1,0 +1,54 @@
+import type { PlanContext } from "../context.ts";
+import { oneOffKey } from "../step-keys.ts";
+import type { Why } from "../tables/provenance.ts";
+import { SOURCES } from "../tables/sources.ts";
+import { CATCH_CAN_TEST } from "../tables/watering.ts";
+import type { PlanStep } from "../types.ts";
+
+const catchCanWhy: Why = {
+  text: "Sprinklers differ a lot. Measuring yours turns our estimate of minutes per zone into the right number.",
+  source: CATCH_CAN_TEST.source,
+  provenance: CATCH_CAN_TEST.provenance,
+};
+const frostWhy: Why = {
+  text: "Grass barely uses water once nights turn frosty, and water left in pipes can freeze.",
+  source: SOURCES.tradePractice,
+  provenance: "common practice",
+};
+
+/** One-off watering notes: when to stop for frost, and how to measure the sprinkler. */
+export function wateringNotes(ctx: PlanContext): PlanStep[] {
+  const { timeline } = ctx;
+  const notes: PlanStep[] = [];
+  // Only announced in the maturing phase: earlier, seedlings still need their
+  // water and the frost warning already covers the risk.
+  if (ctx.frostDay !== null && ctx.frostDay > timeline.establishmentEnd && ctx.frostDay <= timeline.planEnd) {
+    notes.push({
+      key: oneOffKey("note", "frost_stop_watering"),
+      date: ctx.dateOf(ctx.frostDay),
+      phase: ctx.phaseOf(ctx.frostDay),
+      kind: "note",
+      title: "First frost is due about now: stop regular watering",
+      detail:
+        ctx.input.property.irrigation.kind === "in_ground"
+          ? "Turn off the watering schedule and have the system drained before pipes freeze."
+          : "Disconnect and drain hoses before they freeze.",
+      why: frostWhy,
+      cautions: [],
+    });
+  }
+  // Minutes per cycle rest on a guessed rate until the homeowner measures it.
+  if (!ctx.precipitationRateMeasured && ctx.input.property.irrigation.kind !== "none") {
+    notes.push({
+      key: oneOffKey("note", "catch_can_test"),
+      date: ctx.dateOf(1),
+      phase: ctx.phaseOf(1),
+      kind: "note",
+      title: "Measure how much water your sprinkler puts down",
+      detail: `Set ${CATCH_CAN_TEST.cans} straight-sided cups or cans across one watered area, run it for ${CATCH_CAN_TEST.minutes} minutes, and note the millilitres in each. Send us the numbers and we will set exact minutes. Until then the plan assumes ${ctx.precipitationRate} inch an hour.`,
+      why: catchCanWhy,
+      cautions: [],
+    });
+  }
+  return notes;
+}

@@ -1,0 +1,167 @@
+import { z } from "zod";
+import { isValidIsoDate, toDayNumber } from "../dates.ts";
+import { isoDateSchema, localTimeSchema, speciesSchema, timeZoneSchema } from "./common.ts";
+import { programSettingsSchema } from "./program-settings.ts";
+
+export const SERVICES = [
+  "aeration",
+  "dethatching",
+  "overseeding",
+  "slit_seeding",
+  "new_seeding",
+  "starter_fertiliser",
+  "fertiliser_only",
+  "top_dressing",
+] as const;
+export type Service = (typeof SERVICES)[number];
+
+export const SEEDING_SERVICES: readonly Service[] = ["overseeding", "slit_seeding", "new_seeding"];
+
+/** Seed-mix percentages may be rounded on the tag, hence the ±0.5 slack. */
+export const SEED_MIX_SUM_TOLERANCE = 0.5;
+
+const percent = z.number().min(0, "Must be 0 % or more").max(100, "Must be 100 % or less");
+
+export const seedMixEntrySchema = z.object({
+  species: speciesSchema,
+  percent: z.number().gt(0, "Must be more than 0 %").max(100, "Must be 100 % or less"),
+  purityPct: z.number().gt(0, "Must be more than 0 %").max(100, "Must be 100 % or less"),
+  germinationPct: z.number().gt(0, "Must be more than 0 %").max(100, "Must be 100 % or less"),
+});
+
+export const analysisSchema = z
+  .object({ n: percent, p: percent, k: percent })
+  .refine((a) => a.n + a.p + a.k <= 100, { message: "N + P + K cannot add up to more than 100 %" });
+
+export const productAppliedSchema = z.object({
+  name: z.string().trim().min(1, "Name the product").max(120),
+  analysis: analysisSchema,
+  rateLbPer1000: z.number().gt(0, "Must be more than 0").max(100, "Must be at most 100 lb per 1,000 ft²"),
+  quickReleaseN: z.boolean().optional(),
+});
+
+export const visitSchema = z
+  .object({
+    date: isoDateSchema,
+    services: z
+      .array(z.enum(SERVICES))
+      .min(1, "Pick at least one service")
+      .refine((s) => new Set(s).size === s.length, { message: "List each service once" }),
+    seedMix: z.array(seedMixEntrySchema).max(9).default([]),
+    seedRateLbPer1000: z.number().gt(0, "Must be more than 0").max(50, "Must be at most 50 lb per 1,000 ft²").optional(),
+    areaFt2: z.number().gt(0, "Must be more than 0").max(5_000_000, "Must be at most 5,000,000 ft²"),
+    products: z.array(productAppliedSchema).max(10).default([]),
+  })
+  .superRefine((visit, ctx) => {
+    // Cross-field checks run even when single fields failed; guard the shapes.
+    if (!Array.isArray(visit.services) || !Array.isArray(visit.seedMix)) return;
+    const seeding = visit.services.some((s) => SEEDING_SERVICES.includes(s));
+    if (seeding && visit.seedMix.length === 0) {
+      // The plan's watering and mowing dates depend on the species sown.
+      ctx.addIssue({ code: "custom", path: ["seedMix"], message: "List the seed used for this seeding" });
+    }
+    if (visit.seedMix.length === 0) return;
+    const total = visit.seedMix.reduce((sum, entry) => sum + (typeof entry?.percent === "number" ? entry.percent : 0), 0);
+    if (Math.abs(total - 100) > SEED_MIX_SUM_TOLERANCE) {
+      ctx.addIssue({ code: "custom", path: ["seedMix"], message: `Mix percentages add up to ${round1(total)} %, not 100 %` });
+    }
+    const seen = new Set<string>();
+    visit.seedMix.forEach((entry, i) => {
+      if (typeof entry?.species !== "string") return;
+      if (seen.has(entry.species)) {
+        ctx.addIssue({ code: "custom", path: ["seedMix", i, "species"], message: "Each species once; add the percentages together" });
+      }
+      seen.add(entry.species);
+    });
+    if (visit.seedRateLbPer1000 === undefined) {
+      ctx.addIssue({ code: "custom", path: ["seedRateLbPer1000"], message: "Give the seed rate in lb per 1,000 ft²" });
+    }
+  });
+
+const round1 = (x: number) => Math.round(x * 10) / 10;
+
+export const irrigationSchema = z.object({
+  kind: z.enum(["in_ground", "hose_end", "none"]),
+  zones: z.number().int().min(1).max(99).optional(),
+  precipitationRateInPerHour: z.number().min(0.05, "Must be at least 0.05 in/h").max(5, "Must be at most 5 in/h").optional(),
+});
+
+export const propertySchema = z
+  .object({
+    grassType: z.object({
+      species: z.array(speciesSchema).max(9).default([]),
+      season: z.enum(["cool", "warm"]).optional(),
+    }),
+    lawnCondition: z.enum(["thin", "bare", "thick_dormant", "thick"]),
+    irrigation: irrigationSchema,
+    currentMowingHeightIn: z.number().min(0.5, "Must be at least 0.5 in").max(6, "Must be at most 6 in"),
+    mowerHighestSettingIn: z.number().min(1, "Must be at least 1 in").max(6, "Must be at most 6 in"),
+    mowerSettingStepIn: z.number().min(0.125, "Must be at least 1/8 in").max(1, "Must be at most 1 in").optional(),
+    timeZone: timeZoneSchema,
+    /** Optional: derived from the time zone when absent. */
+    hemisphere: z.enum(["north", "south"]).optional(),
+    /** Optional: frost-free climates have none. */
+    expectedFirstFrost: isoDateSchema.optional(),
+  })
+  .superRefine((property, ctx) => {
+    const grass = property.grassType;
+    if (grass && Array.isArray(grass.species) && grass.species.length === 0 && grass.season === undefined) {
+      ctx.addIssue({ code: "custom", path: ["grassType"], message: "Give the lawn's grass species or its season (cool or warm)" });
+    }
+    if (
+      typeof property.currentMowingHeightIn === "number" &&
+      typeof property.mowerHighestSettingIn === "number" &&
+      property.currentMowingHeightIn > property.mowerHighestSettingIn
+    ) {
+      ctx.addIssue({
+        code: "custom",
+        path: ["currentMowingHeightIn"],
+        message: "Is above the mower's highest setting",
+      });
+    }
+  });
+
+export const observationSchema = z.discriminatedUnion("kind", [
+  z.object({ kind: z.literal("sprouts_seen"), onDay: z.number().int().min(1).max(60) }),
+  z.object({ kind: z.literal("heavy_rain"), date: isoDateSchema }),
+  z.object({ kind: z.literal("step_skipped"), stepKey: z.string().min(1).max(120) }),
+]);
+
+export const planOptionsSchema = z.object({
+  today: isoDateSchema.optional(),
+  observations: z.array(observationSchema).max(500).default([]),
+});
+
+export const planInputSchema = z
+  .object({
+    visit: visitSchema,
+    property: propertySchema,
+    program: programSettingsSchema.prefault({}),
+    options: planOptionsSchema.prefault({}),
+  })
+  .superRefine((input, ctx) => {
+    // zod still runs this when other fields failed, so only compare real dates.
+    const frost = input.property?.expectedFirstFrost;
+    const visitDate = input.visit?.date;
+    if (isValidIsoDate(frost) && isValidIsoDate(visitDate) && toDayNumber(frost) <= toDayNumber(visitDate)) {
+      ctx.addIssue({
+        code: "custom",
+        path: ["property", "expectedFirstFrost"],
+        message: "The expected first frost must be after the visit date",
+      });
+    }
+  });
+
+export type SeedMixEntry = z.output<typeof seedMixEntrySchema>;
+export type ProductApplied = z.output<typeof productAppliedSchema>;
+export type Visit = z.output<typeof visitSchema>;
+export type Irrigation = z.output<typeof irrigationSchema>;
+export type Property = z.output<typeof propertySchema>;
+export type Observation = z.output<typeof observationSchema>;
+export type PlanOptions = z.output<typeof planOptionsSchema>;
+export type PlanInput = z.output<typeof planInputSchema>;
+/** What callers may send: defaults (program, options, empty lists) filled in by parsing. */
+export type PlanInputRaw = z.input<typeof planInputSchema>;
+
+// Re-exported so consumers validating single fields use the same rules.
+export { isoDateSchema, localTimeSchema, speciesSchema, timeZoneSchema };

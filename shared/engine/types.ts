@@ -1,0 +1,155 @@
+import type { NutrientAmounts } from "../calculators/fertiliser.ts";
+import type { IsoDate } from "./dates.ts";
+import type { CautionId } from "./tables/cautions.ts";
+import type { Provenance, Why } from "./tables/provenance.ts";
+import type { Species } from "./tables/species.ts";
+import type { Hemisphere } from "./tables/timing.ts";
+
+export type Phase = "prep" | "germination" | "establishment" | "maturing";
+
+export type StepKind =
+  | "water"
+  | "mow"
+  | "feed"
+  | "leaf_cleanup"
+  | "check_in_photo"
+  | "prep_mow"
+  | "flag_hazards"
+  | "clear_debris"
+  | "note";
+
+export type HoldOffKind =
+  | "weed_and_feed"
+  | "broadleaf_herbicide"
+  | "crabgrass_pre_emergent"
+  | "high_n_quick_release"
+  | "heavy_traffic";
+
+export type StepState = "done" | "skipped";
+
+export interface FeedAdvice {
+  readonly product: "starter" | "slow_release_n";
+  /** Always false from this engine; kept explicit so checks can prove it. */
+  readonly highNQuickRelease: boolean;
+  readonly nitrogenLbPer1000?: number;
+}
+
+export interface PlanStep {
+  /** Stable across recomputes: daily steps carry their date, one-off steps do not. */
+  readonly key: string;
+  readonly date: IsoDate;
+  readonly phase: Phase;
+  readonly kind: StepKind;
+  readonly title: string;
+  readonly detail: string;
+  /** Local wall-clock start times ("HH:MM") for watering cycles, all real times in the zone. */
+  readonly times?: readonly string[];
+  readonly minutesPerCycle?: number;
+  readonly heightIn?: number;
+  readonly feed?: FeedAdvice;
+  /** Hold-off windows this step must never fall inside. */
+  readonly restrictedBy?: readonly HoldOffKind[];
+  readonly why: Why;
+  readonly cautions: readonly CautionId[];
+  /** Set when the homeowner ticked the step off or skipped it. */
+  readonly state?: StepState;
+}
+
+export interface HoldOff {
+  readonly kind: HoldOffKind;
+  readonly start: IsoDate;
+  /** Last day of the hold-off, inclusive. */
+  readonly end: IsoDate;
+  readonly why: string;
+  readonly source: string;
+  readonly provenance: Provenance;
+  readonly cautions: readonly CautionId[];
+}
+
+export type WarningSeverity = "risk" | "caution" | "info";
+
+export interface PlanWarning {
+  readonly code: string;
+  readonly severity: WarningSeverity;
+  readonly message: string;
+  readonly reason: string;
+  readonly source: string;
+  readonly provenance: Provenance;
+}
+
+export interface SpeciesSeedSummary {
+  readonly species: Species;
+  readonly percent: number;
+  readonly plsFraction: number;
+  readonly bulkLb: number;
+  readonly seedsPerSqFt: number | null;
+}
+
+export interface SeedSummary {
+  readonly rateLbPer1000: number;
+  readonly rateGPerM2: number;
+  /** Percent-weighted pure live seed of the mix, as a fraction. */
+  readonly plsFraction: number;
+  readonly plsRateLbPer1000: number;
+  readonly bulkSeedLb: number;
+  readonly pureLiveSeedLb: number;
+  /** Null when seeds per pound are not published for every species in the mix. */
+  readonly seedsPerSqFt: number | null;
+  readonly expectedRangeLbPer1000: { readonly min: number; readonly max: number; readonly basis: "overseeding" | "new_seeding" };
+  readonly perSpecies: readonly SpeciesSeedSummary[];
+}
+
+export interface ProductSummary {
+  readonly name: string;
+  readonly rateLbPer1000: number;
+  readonly totalLb: number;
+  readonly totalKg: number;
+  readonly nutrientsPer1000: NutrientAmounts;
+  readonly nutrientsTotal: NutrientAmounts;
+}
+
+export interface CalculatorSummary {
+  readonly areaFt2: number;
+  readonly areaM2: number;
+  readonly seed: SeedSummary | null;
+  readonly products: readonly ProductSummary[];
+  readonly nutrientsPer1000: NutrientAmounts;
+  readonly nutrientsTotal: NutrientAmounts;
+  readonly precipitationRateInPerHour: number;
+  readonly precipitationRateMeasured: boolean;
+  readonly germinationMinutesPerCycle: number | null;
+}
+
+export interface PhaseRange {
+  readonly phase: Phase;
+  readonly start: IsoDate;
+  readonly end: IsoDate;
+}
+
+export interface PlanMeta {
+  readonly engineVersion: number;
+  readonly programVersion: number;
+  /** Hash of the normalised input, to tell whether a stored plan is stale. */
+  readonly inputHash: string;
+  readonly visitDate: IsoDate;
+  readonly timeZone: string;
+  readonly hemisphere: Hemisphere;
+  readonly seeding: boolean;
+  readonly phases: readonly PhaseRange[];
+  readonly firstMowDate: IsoDate | null;
+  readonly germinationWateringEnds: IsoDate | null;
+  readonly planEnds: IsoDate;
+  /** Present on recomputed plans: the day the recompute was anchored on. */
+  readonly recomputedOn?: IsoDate;
+}
+
+export interface Plan {
+  readonly meta: PlanMeta;
+  readonly prepSteps: readonly PlanStep[];
+  readonly steps: readonly PlanStep[];
+  readonly holdOffs: readonly HoldOff[];
+  readonly warnings: readonly PlanWarning[];
+  readonly summary: CalculatorSummary;
+  /** Full texts of every caution id used anywhere in the plan. */
+  readonly cautions: readonly { readonly id: CautionId; readonly text: string }[];
+}
