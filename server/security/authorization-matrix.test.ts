@@ -1,0 +1,84 @@
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import request from "supertest";
+import { createTestContext, signInCustomer, signInStaff, type TestContext } from "../test/harness.ts";
+import { collectRoutes } from "../routes.ts";
+import { createMessenger } from "../messaging/create-messenger.ts";
+import { authorizationMatrix, type Caller, type Outcome } from "./authorization-matrix.ts";
+
+type Agent = ReturnType<typeof request.agent>;
+let ctx: TestContext;
+const agents = {} as Record<Caller, Agent>;
+/** Ids of records that belong to the "own" customer (Ruth) and to another one (Tomasz). */
+const records = { own: {} as Record<string, number>, other: {} as Record<string, number> };
+
+async function recordsOf(ref: string) {
+  const property = await ctx.db("properties").join("customers", "customers.id", "properties.customer_id").where("customers.external_ref", ref).first<{ id: number }>("properties.id");
+  const plan = await ctx.db("care_plans").where({ property_id: property!.id }).orderBy("id").first<{ id: number; visit_id: number }>("id", "visit_id");
+  const step = await ctx.db("plan_steps").where({ plan_id: plan!.id }).orderBy("id").first<{ id: number }>("id");
+  return { id: property!.id, planId: plan!.id, stepId: Number(step!.id), visitId: plan!.visit_id };
+}
+
+beforeAll(async () => {
+  ctx = await createTestContext();
+  records.own = await recordsOf("C-1001");
+  records.other = await recordsOf("C-1002");
+  agents.signedOut = request.agent(ctx.app);
+  agents.customerOwn = await signInCustomer(ctx, "ruth.okonkwo@mail.example");
+  agents.customerOther = await signInCustomer(ctx, "ruth.okonkwo@mail.example"); // the same homeowner, aimed at Tomasz's records
+  agents.technician = await signInStaff(ctx, "marco@cobblefield.example");
+  agents.manager = await signInStaff(ctx, "dana@cobblefield.example");
+  agents.deactivated = await signInStaff(ctx, "priya@cobblefield.example");
+  await ctx.db("users").where({ email: "priya@cobblefield.example" }).update({ active: false });
+});
+afterAll(async () => {
+  await ctx.db("users").where({ email: "priya@cobblefield.example" }).update({ active: true });
+  await ctx.close();
+});
+
+const routeTable = () =>
+  collectRoutes({ config: ctx.config, db: ctx.db, messenger: createMessenger(ctx.config), log: () => {} }).map((r) => `${r.method.toUpperCase()} ${r.path}`);
+
+function fillPath(path: string, caller: Caller): string {
+  const ids = caller === "customerOther" ? records.other : records.own;
+  // /api/visits/:id is a visit; every other :id here is a property.
+  const idFor = (name: string) => (name === "id" && path.startsWith("/api/visits/") ? ids.visitId! : ids[name]!);
+  return path.replace(/:(\w+)/g, (_m, name: string) => String(idFor(name)));
+}
+
+/** Valid bodies where validation would otherwise answer 400 before ownership is checked. */
+const sampleBodies: Record<string, unknown> = {
+  "PUT /api/plans/:planId/steps/:stepId/state": { state: "done" },
+  "POST /api/plans/:planId/observations": { kind: "sprouts_seen", onDay: 5 },
+};
+
+function matches(outcome: Outcome, status: number): boolean {
+  if (outcome === "ok") return status < 500 && ![401, 403, 404].includes(status);
+  return status === outcome;
+}
+
+describe("authorization matrix, generated from the route table", () => {
+  it("has an entry for every route and no entry for a route that no longer exists", () => {
+    const routes = routeTable();
+    expect(routes.filter((r) => !(r in authorizationMatrix))).toEqual([]);
+    expect(Object.keys(authorizationMatrix).filter((k) => !routes.includes(k))).toEqual([]);
+  });
+
+  const callers: Caller[] = ["signedOut", "customerOwn", "customerOther", "technician", "manager", "deactivated"];
+  it("answers every route as the matrix says for every kind of caller", async () => {
+    // Sign-out last: it ends the session the other rows need.
+    const routes = routeTable().sort((a, b) => Number(a.endsWith("sign-out")) - Number(b.endsWith("sign-out")));
+    const mismatches: string[] = [];
+    for (const caller of callers) {
+      for (const key of routes) {
+        const [method, path] = key.split(" ") as [string, string];
+        const url = fillPath(path, caller);
+        const agent = agents[caller];
+        const req = agent[method.toLowerCase() as "get"](url).set("X-Forwarded-For", "192.0.2.10");
+        const res = method === "GET" ? await req : await req.send(sampleBodies[key] ?? {});
+        const expected = authorizationMatrix[key]![caller];
+        if (!matches(expected, res.status)) mismatches.push(`${caller} ${method} ${url}: expected ${expected}, got ${res.status}`);
+      }
+    }
+    expect(mismatches).toEqual([]);
+  });
+});

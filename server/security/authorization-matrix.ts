@@ -1,0 +1,45 @@
+/**
+ * Who may reach each API route. Every route in the server's route table must have a row;
+ * the test fails on a route without one, so a new route cannot ship without deciding this.
+ *
+ * "ok"  the request is let through (any answer but 401/403/404 and no 5xx)
+ * 401   signed out (or the session ended), 403 wrong role,
+ * 404   a customer reaching someone else's record: hidden, not forbidden
+ */
+export type Outcome = "ok" | 401 | 403 | 404;
+export type Caller = "signedOut" | "customerOwn" | "customerOther" | "technician" | "manager" | "deactivated";
+export type MatrixRow = Record<Caller, Outcome>;
+
+const publicRoute: MatrixRow = { signedOut: "ok", customerOwn: "ok", customerOther: "ok", technician: "ok", manager: "ok", deactivated: "ok" };
+const staffOnly: MatrixRow = { signedOut: 401, customerOwn: 403, customerOther: 403, technician: "ok", manager: "ok", deactivated: 401 };
+const managerOnly: MatrixRow = { signedOut: 401, customerOwn: 403, customerOther: 403, technician: 403, manager: "ok", deactivated: 401 };
+const customerOnly: MatrixRow = { signedOut: 401, customerOwn: "ok", customerOther: "ok", technician: 403, manager: 403, deactivated: 401 };
+const anyoneSignedIn: MatrixRow = { signedOut: 401, customerOwn: "ok", customerOther: "ok", technician: "ok", manager: "ok", deactivated: 401 };
+/** A customer's own record, or any record of the company for staff. */
+const ownRecordOrStaff: MatrixRow = { signedOut: 401, customerOwn: "ok", customerOther: 404, technician: "ok", manager: "ok", deactivated: 401 };
+/** Only the customer who owns the record. */
+const ownRecordOnly: MatrixRow = { signedOut: 401, customerOwn: "ok", customerOther: 404, technician: 403, manager: 403, deactivated: 401 };
+
+export const authorizationMatrix: Record<string, MatrixRow> = {
+  "GET /api/health": publicRoute,
+  "GET /api/company": publicRoute,
+  "GET /api/me": anyoneSignedIn,
+  "POST /api/auth/link": publicRoute,
+  "POST /api/auth/link/consume": publicRoute,
+  "POST /api/auth/sign-out": publicRoute,
+  "GET /api/dev/outbox": staffOnly,
+  "GET /api/my/properties": customerOnly,
+  "GET /api/properties/:id": ownRecordOrStaff,
+  "POST /api/plans/preview": staffOnly,
+  "GET /api/programs/current": staffOnly,
+  "GET /api/my/plans": customerOnly,
+  "GET /api/plans/:planId": ownRecordOrStaff,
+  "GET /api/plans/:planId/today": ownRecordOrStaff,
+  "PUT /api/plans/:planId/steps/:stepId/state": ownRecordOrStaff,
+  "POST /api/plans/:planId/observations": ownRecordOrStaff,
+  "POST /api/plans/:planId/regenerate": staffOnly,
+  "POST /api/visits": staffOnly,
+  "PATCH /api/visits/:id": staffOnly,
+};
+
+export const matrixKinds = { publicRoute, staffOnly, managerOnly, customerOnly, anyoneSignedIn, ownRecordOrStaff, ownRecordOnly };
