@@ -8,6 +8,7 @@ import { apiNotFound, errorHandler } from "./http/errors.ts";
 import { securityHeaders } from "./web/security-headers.ts";
 import { buildRouter } from "./http/route.ts";
 import { requireSameOrigin } from "./http/same-origin.ts";
+import { recordAudit } from "./features/audit/repo.ts";
 import { collectRoutes } from "./routes.ts";
 import { googleSignInRouter } from "./features/auth/routes.ts";
 import { serveBuiltApps, serveWithVite } from "./web/serve-apps.ts";
@@ -44,7 +45,11 @@ export async function createApp(deps: AppDeps, web: WebMode = "none"): Promise<B
   app.use(passport.session());
 
   app.use(googleSignInRouter(passport));
-  app.use(buildRouter(collectRoutes(deps)));
+  app.use(
+    buildRouter(collectRoutes(deps), {
+      audit: (entry) => void recordAudit(deps.db, entry).catch((err) => deps.log("could not write the audit log", err)),
+    }),
+  );
   app.use("/api", apiNotFound);
 
   const vite = web === "vite" ? await serveWithVite(app) : undefined;

@@ -7,11 +7,12 @@ import { propertyRoutes } from "./features/properties/routes.ts";
 import { companyRoutes } from "./features/company/routes.ts";
 import { planRoutes } from "./features/plans/routes.ts";
 import { visitRoutes } from "./features/visits/routes.ts";
+import { auditRoutes } from "./features/audit/routes.ts";
 
 /**
  * The server's whole API route table. The authorisation matrix test reads it, so a
  * route added here without an expectation there fails that test.
  */
 export function collectRoutes(deps: AppDeps): RouteSpec[] {
-  return [...healthRoutes(deps.db), ...companyRoutes(deps.db), ...authRoutes(deps), ...propertyRoutes(deps.db), ...planRoutes(deps), ...visitRoutes(deps), ...devOutboxRoutes(deps.config)];
+  return [...healthRoutes(deps.db), ...companyRoutes(deps.db), ...authRoutes(deps), ...propertyRoutes(deps.db), ...planRoutes(deps), ...visitRoutes(deps), ...auditRoutes(deps.db), ...devOutboxRoutes(deps.config)];
 }

@@ -31,6 +31,11 @@ export type RouteSpec<PS extends Schema | undefined = Schema | undefined, QS ext
   params?: PS;
   query?: QS;
   body?: BS;
+  /**
+   * Staff reads and changes of customer records are written to the audit log under this
+   * action name (e.g. "plan.read"); the first path parameter names the record.
+   */
+  audit?: string;
   /** Extra middleware before validation (e.g. multipart parsing). */
   before?: ((req: Request, res: Response, next: NextFunction) => void)[];
   handler: (ctx: RouteContext<Infer<PS>, Infer<QS>, Infer<BS>>) => Promise<unknown> | unknown;
@@ -63,12 +68,24 @@ export function checkAccess(access: Access, user: SessionUser | undefined): asse
  * Mounts route specs on a router. Handlers return the response body (sent as JSON with 200,
  * or the status they set), or undefined after sending the response themselves.
  */
-export function buildRouter(specs: readonly RouteSpec[]): Router {
+export type AuditEntry = { user: SessionUser; action: string; subjectId: string | null; method: string; path: string; ip: string | undefined };
+
+export function buildRouter(specs: readonly RouteSpec[], options: { audit?: (entry: AuditEntry) => void } = {}): Router {
   const router = Router();
   for (const spec of specs) {
     router[spec.method](spec.path, ...(spec.before ?? []), async (req: Request, res: Response) => {
       const user = req.user as SessionUser | undefined;
       checkAccess(spec.access, user);
+      if (spec.audit && user && user.role !== "customer" && options.audit) {
+        const action = spec.audit;
+        const record = options.audit;
+        // Only what actually happened is recorded: refused or failed requests are not reads or changes.
+        res.on("finish", () => {
+          if (res.statusCode >= 400) return;
+          const subjectId = Object.values(req.params)[0];
+          record({ user, action, subjectId: subjectId === undefined ? null : String(subjectId), method: req.method, path: req.originalUrl, ip: req.ip });
+        });
+      }
       const ctx = {
         req,
         res,

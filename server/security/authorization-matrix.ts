@@ -40,6 +40,7 @@ export const authorizationMatrix: Record<string, MatrixRow> = {
   "POST /api/plans/:planId/regenerate": staffOnly,
   "POST /api/visits": staffOnly,
   "PATCH /api/visits/:id": staffOnly,
+  "GET /api/audit": managerOnly,
 };
 
 export const matrixKinds = { publicRoute, staffOnly, managerOnly, customerOnly, anyoneSignedIn, ownRecordOrStaff, ownRecordOnly };

@@ -50,6 +50,7 @@ export function planRoutes(deps: AppDeps, onChange?: PlanChangeHook): RouteSpec[
       method: "get",
       path: "/api/plans/:planId",
       access: everyone,
+      audit: "plan.read",
       params: planIdParamsSchema,
       handler: async ({ user, params }) => {
         await findPlanForUser(db, user, params.planId);
@@ -70,6 +71,7 @@ export function planRoutes(deps: AppDeps, onChange?: PlanChangeHook): RouteSpec[
       method: "put",
       path: "/api/plans/:planId/steps/:stepId/state",
       access: everyone,
+      audit: "plan.step_state_changed",
       params: planStepParamsSchema,
       body: changeStepStateSchema,
       handler: async ({ user, params, body }) => {
@@ -88,6 +90,7 @@ export function planRoutes(deps: AppDeps, onChange?: PlanChangeHook): RouteSpec[
       method: "post",
       path: "/api/plans/:planId/observations",
       access: everyone,
+      audit: "plan.observation_added",
       params: planIdParamsSchema,
       body: observationSchema,
       handler: async ({ user, params, body }) => {
@@ -100,6 +103,7 @@ export function planRoutes(deps: AppDeps, onChange?: PlanChangeHook): RouteSpec[
       method: "post",
       path: "/api/plans/:planId/regenerate",
       access: staff,
+      audit: "plan.regenerated",
       params: planIdParamsSchema,
       handler: async ({ user, params }) => {
         await findPlanForUser(db, user, params.planId);

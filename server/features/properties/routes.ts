@@ -22,6 +22,7 @@ export function propertyRoutes(db: Db): RouteSpec[] {
       method: "get",
       path: "/api/properties/:id",
       access: ["customer", "technician", "manager"],
+      audit: "property.read",
       params: idParamSchema,
       handler: async ({ user, params }) => {
         const property = await repo.findInCompany(db, user.companyId, params.id);

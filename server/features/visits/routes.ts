@@ -42,6 +42,7 @@ export function visitRoutes(deps: AppDeps, onChange?: PlanChangeHook): RouteSpec
       method: "patch",
       path: "/api/visits/:id",
       access: staff,
+      audit: "visit.moved",
       params: idParamSchema,
       body: moveVisitSchema,
       handler: async ({ user, params, body }) => {
