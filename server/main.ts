@@ -1,7 +1,7 @@
 /**
  * The server process: API, sign-in, and the two web apps.
- * `SERVE_APPS=vite` serves the apps through Vite with hot reload (npm run dev);
- * otherwise it serves the built apps from dist/.
+ * `SERVE_APPS=vite` serves the apps through Vite with hot reload (npm run dev),
+ * `SERVE_APPS=none` serves the API alone (fault tests); otherwise it serves the built apps from dist/.
  */
 import "dotenv/config";
 import { createServer } from "node:http";
@@ -28,7 +28,8 @@ try {
 
 const db = createDb(config.DATABASE_URL);
 const messenger = createMessenger(config);
-const web: WebMode = process.env.SERVE_APPS === "vite" ? "vite" : "built";
+const webModes: Record<string, WebMode> = { vite: "vite", none: "none" };
+const web: WebMode = webModes[process.env.SERVE_APPS ?? ""] ?? "built";
 const { app, close } = await createApp({ config, db, messenger, log }, web);
 const server = createServer(app);
 server.listen(config.PORT, "127.0.0.1", () => {

@@ -11,7 +11,6 @@ import { ensureDatabase, ensurePostgres, type PostgresCluster } from "./postgres
 import { postgresPort, type StackPorts } from "./ports.ts";
 
 const repoRoot = resolve(import.meta.dirname, "../..");
-const tsx = resolve(repoRoot, "node_modules/.bin/tsx");
 
 export type StackOptions = {
   nodeEnv: "development" | "test";
@@ -35,7 +34,8 @@ export const fakeOAuthAccounts = [
 ];
 
 function startChild(name: string, script: string, env: NodeJS.ProcessEnv, quiet: boolean): ChildProcess {
-  const child = spawn(tsx, [script], {
+  // Node itself with tsx as a loader (not the tsx wrapper), so a signal or a kill reaches the process itself.
+  const child = spawn(process.execPath, ["--import", "tsx", script], {
     cwd: repoRoot,
     env: { ...process.env, ...env },
     stdio: ["ignore", quiet ? "ignore" : "inherit", "inherit"],
