@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { bigRecordId, recordId } from "./ids.ts";
 
 /**
  * Care plans as the API serves them: the engine's plan, stored, with each step's id and
@@ -99,8 +100,5 @@ export const changeStepStateSchema = z.object({
 });
 export type ChangeStepState = z.infer<typeof changeStepStateSchema>;
 
-export const planStepParamsSchema = z.object({
-  planId: z.coerce.number().int().positive(),
-  stepId: z.coerce.number().int().positive(),
-});
-export const planIdParamsSchema = z.object({ planId: z.coerce.number().int().positive() });
+export const planStepParamsSchema = z.object({ planId: recordId, stepId: bigRecordId });
+export const planIdParamsSchema = z.object({ planId: recordId });

@@ -1,8 +1,7 @@
 import { z } from "zod";
+import { recordId } from "./ids.ts";
 
-export const idParamSchema = z.object({
-  id: z.coerce.number().int("Must be a whole number").positive("Must be a positive number").max(2_147_483_647, "Too large"),
-});
+export const idParamSchema = z.object({ id: recordId });
 
 export const propertySummarySchema = z.object({
   id: z.number().int(),
