@@ -51,7 +51,9 @@ describe("fuzzing every API route as every caller", () => {
             const url = spec.path.replace(/:(\w+)/g, () => encodeURIComponent(segments[i++] ?? "x"));
             let req = agent[spec.method](url).query(q).set("X-Forwarded-For", "192.0.2.99");
             if (spec.method !== "get") {
-              req = asRawText ? req.set("Content-Type", "application/json").send(JSON.stringify(payload).slice(0, -1) || "{") : req.send(payload as object);
+              // Well-formed JSON of any type, or JSON cut short by one character.
+              const json = JSON.stringify(payload);
+              req = req.set("Content-Type", "application/json").send(asRawText ? json.slice(0, -1) || "{" : json);
             }
             const res = await req;
             const text = res.text ?? "";
