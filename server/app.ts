@@ -8,6 +8,7 @@ import { apiNotFound, errorHandler } from "./http/errors.ts";
 import { securityHeaders } from "./web/security-headers.ts";
 import { buildRouter } from "./http/route.ts";
 import { requireSameOrigin } from "./http/same-origin.ts";
+import { createRateLimit, limitSpecs } from "./http/rate-limits.ts";
 import { recordAudit } from "./features/audit/repo.ts";
 import { collectRoutes } from "./routes.ts";
 import { googleSignInRouter } from "./features/auth/routes.ts";
@@ -44,6 +45,9 @@ export async function createApp(deps: AppDeps, web: WebMode = "none"): Promise<B
   app.use(sessions.middleware);
   app.use(passport.session());
 
+  app.use(["/api/auth/link", "/api/auth/link/consume"], createRateLimit(deps.db, limitSpecs.signIn));
+  app.post("/api/plans/:planId/questions", createRateLimit(deps.db, limitSpecs.uploads));
+  app.use("/api/webhooks", createRateLimit(deps.db, limitSpecs.webhooks));
   app.use(googleSignInRouter(passport));
   app.use(
     buildRouter(collectRoutes(deps), {

@@ -80,6 +80,7 @@ export function tokenFromLink(link: string): string {
 /** Sign-in limits count recent requests; tests that are not about the limits start from none. */
 export async function forgetSignInRequests(ctx: TestContext) {
   await ctx.db("sign_in_requests").delete();
+  await ctx.db("rate_limit_hits").where("key", "like", "sign-in:%").delete();
 }
 
 /** Signs a homeowner in through a real one-time link and returns the signed-in agent. */
