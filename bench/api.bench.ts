@@ -1,0 +1,102 @@
+/**
+ * API under load at the size of a busy company (50,000 homeowners, 3 million plan steps):
+ * the homeowner's "today" request and the technician's question queue, signed in, against a
+ * bare Express "hello" route in the same server process, with autocannon on loopback.
+ * Also prints EXPLAIN summaries of the hot queries at that size.
+ */
+import autocannon from "autocannon";
+import { spawn } from "node:child_process";
+import { resolve } from "node:path";
+import { ensureDatabase, ensurePostgres } from "../scripts/lib/postgres.ts";
+import { postgresPort } from "../scripts/lib/ports.ts";
+import { createDb } from "../server/db.ts";
+import { startFakes, fakeDefaults } from "../server/fakes/index.ts";
+import { fakeOAuthAccounts } from "../scripts/lib/stack.ts";
+import { benchSize, generateBenchData } from "./api/generate-data.ts";
+import { homeownerCookie, staffCookie } from "./api/sign-in.ts";
+import { explainSummary } from "./api/explain.ts";
+
+const repoRoot = resolve(import.meta.dirname, "..");
+const port = 5770;
+const appUrl = `http://localhost:${port}`;
+const connections = 100;
+const durationSeconds = Number(process.env.BENCH_SECONDS ?? 10);
+
+const cluster = await ensurePostgres({ port: postgresPort });
+await ensureDatabase(cluster, "sproutline_bench_api", { fresh: true });
+const databaseUrl = cluster.url("sproutline_bench_api");
+const db = createDb(databaseUrl);
+await db.migrate.latest();
+await db.seed.run();
+const company = await db("companies").orderBy("id").first<{ id: number }>("id");
+let started = Date.now();
+await generateBenchData(db, company!.id);
+const generationSeconds = (Date.now() - started) / 1000;
+const stepCount = Number((await db("plan_steps").count<{ count: string }[]>("* as count"))[0]!.count);
+console.log(`data: ${benchSize.customers} homeowners, ${stepCount} plan steps, generated in ${generationSeconds.toFixed(0)} s`);
+
+const fakes = await startFakes({ oauth: { accounts: fakeOAuthAccounts } });
+const server = spawn(process.execPath, ["--import", "tsx", "bench/api/server.ts"], {
+  cwd: repoRoot,
+  stdio: ["ignore", "pipe", "inherit"],
+  env: {
+    ...process.env,
+    NODE_ENV: "test",
+    PORT: String(port),
+    PUBLIC_URL: appUrl,
+    DATABASE_URL: databaseUrl,
+    SESSION_SECRET: "bench-session-secret-0123456789abcdef",
+    SMTP_HOST: fakes.smtpHost,
+    SMTP_PORT: String(fakes.smtpPort),
+    TWILIO_API_BASE_URL: fakes.smsUrl,
+    TWILIO_ACCOUNT_SID: fakeDefaults.smsAccountSid,
+    GOOGLE_AUTH_BASE_URL: fakes.oauthUrl,
+    FAKES_CONTROL_URL: fakes.controlUrl,
+    TRUST_PROXY: "1",
+  },
+});
+await new Promise<void>((ready) => server.stdout!.on("data", (d: Buffer) => d.toString().includes("ready") && ready()));
+
+try {
+  const homeowner = await homeownerCookie(appUrl, fakes, "bench-777@bench.example");
+  const planId = (await (await fetch(`${appUrl}/api/my/plans`, { headers: { cookie: homeowner } })).json()).plans[0].id as number;
+  const technician = await staffCookie(appUrl, fakes, "marco@cobblefield.example");
+  const queuePath = "/api/questions/open";
+  const queueOk = (await fetch(`${appUrl}${queuePath}`, { headers: { cookie: technician } })).status === 200;
+
+  const load = async (name: string, path: string, cookie?: string) => {
+    // Warm up, then measure.
+    await autocannon({ url: `${appUrl}${path}`, connections: 10, duration: 2, headers: cookie ? { cookie } : {} });
+    const r = await autocannon({ url: `${appUrl}${path}`, connections, duration: durationSeconds, headers: cookie ? { cookie } : {} });
+    const result = { name, path, requestsPerSecond: Math.round(r.requests.average), p50Ms: r.latency.p50, p99Ms: r.latency.p99, non2xx: r.non2xx, errors: r.errors };
+    console.log(`${name}: ${result.requestsPerSecond} req/s, p50 ${result.p50Ms} ms, p99 ${result.p99Ms} ms, non-2xx ${result.non2xx}, errors ${result.errors}`);
+    return result;
+  };
+  started = Date.now();
+  const hello = await load("bare Express hello (baseline)", "/bench/hello");
+  const today = await load("homeowner today", `/api/plans/${planId}/today`, homeowner);
+  const queue = queueOk ? await load("technician question queue", queuePath, technician) : null;
+
+  const explains = await explainSummary(db, { planId, companyId: company!.id });
+  for (const e of explains) console.log(`EXPLAIN ${e.name}: ${e.summary}`);
+
+  const ratio = (x: number) => Number((x / hello.requestsPerSecond).toFixed(2));
+  console.log(
+    JSON.stringify({
+      name: "api",
+      homeowners: benchSize.customers,
+      planSteps: stepCount,
+      connections,
+      durationSeconds,
+      dataGenerationSeconds: Math.round(generationSeconds),
+      baseline: hello,
+      today: { ...today, throughputRatioToBaseline: ratio(today.requestsPerSecond), meetsThroughputTarget: ratio(today.requestsPerSecond) >= 0.35, meetsP99Target: today.p99Ms < 50 },
+      queue: queue ? { ...queue, throughputRatioToBaseline: ratio(queue.requestsPerSecond) } : "queue endpoint not available",
+      explain: explains,
+    }),
+  );
+} finally {
+  server.kill("SIGTERM");
+  await fakes.stop();
+  await db.destroy();
+}

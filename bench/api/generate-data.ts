@@ -1,0 +1,74 @@
+/**
+ * Fills a bench database to the size of a busy company: 50,000 homeowners, each with a lawn,
+ * a seeding visit and a care plan of 60 steps (3 million steps), plus open questions.
+ * Done in SQL with generate_series; the plan content is one real engine plan repeated.
+ */
+import type { Knex } from "knex";
+import { generatePlan, parsePlanInput } from "../../shared/engine/index.ts";
+import { overseedingVisit } from "../../shared/engine/testing/fixtures.ts";
+
+export const benchSize = { customers: 50_000, stepsPerPlan: 60 };
+
+export async function generateBenchData(db: Knex, companyId: number): Promise<void> {
+  const parsed = parsePlanInput(overseedingVisit());
+  if (!parsed.ok) throw new Error("fixture invalid");
+  const plan = generatePlan(parsed.value);
+  const step = plan.steps.find((s) => s.kind === "water")!;
+  const content = JSON.stringify({ detail: step.detail, times: step.times, minutesPerCycle: step.minutesPerCycle, why: step.why, cautions: step.cautions });
+  const figures = JSON.stringify({ summary: plan.summary, meta: plan.meta, cautions: plan.cautions });
+  const { customers, stepsPerPlan } = benchSize;
+
+  await db.raw(
+    `insert into users (company_id, role, name, email)
+     select ?, 'customer', 'Bench Homeowner ' || g, 'bench-' || g || '@bench.example' from generate_series(1, ?) g`,
+    [companyId, customers],
+  );
+  await db.raw(
+    `insert into customers (company_id, user_id, first_name, last_name, external_ref)
+     select ?, u.id, 'Bench', 'Homeowner ' || u.id, 'B-' || u.id from users u where u.email like 'bench-%'`,
+    [companyId],
+  );
+  await db.raw(
+    `insert into properties (customer_id, label, street, town, region, postal_code, time_zone, lawn_area_ft2, lawn)
+     select c.id, 'Home', c.id || ' Bench Road', 'Wrenmoor', 'OH', '44990', 'America/New_York', 6000, '{}'::jsonb
+     from customers c where c.external_ref like 'B-%'`,
+  );
+  await db.raw(
+    `insert into service_visits (property_id, visit_date, services, details, import_key)
+     select p.id, current_date - (p.id % 30), '{aeration,overseeding}', '{"areaFt2": 6000}'::jsonb, 'bench:' || p.id
+     from properties p join customers c on c.id = p.customer_id where c.external_ref like 'B-%'`,
+  );
+  await db.raw(
+    `insert into care_plans (property_id, visit_id, program_version, input, hold_offs, warnings, figures)
+     select v.property_id, v.id, 1, '{}'::jsonb, ?::jsonb, '[]'::jsonb, ?::jsonb
+     from service_visits v where v.import_key like 'bench:%'`,
+    [JSON.stringify(plan.holdOffs), figures],
+  );
+  await db.raw(
+    `insert into plan_steps (plan_id, key, date, phase, kind, title, content, state)
+     select cp.id, 'bench:' || g, v.visit_date + g, 'germination', 'water', ?, ?::jsonb,
+            (case when g < 5 then 'done' else 'pending' end)::plan_step_state
+     from care_plans cp join service_visits v on v.id = cp.visit_id, generate_series(0, ? - 1) g
+     where v.import_key like 'bench:%'`,
+    [step.title, content, stepsPerPlan],
+  );
+  // Every 10th homeowner has asked a question, so the technician's queue has real depth.
+  if (await db.schema.hasTable("messages")) {
+    await db.raw(
+      `insert into conversations (plan_id)
+       select cp.id from care_plans cp join service_visits v on v.id = cp.visit_id
+       where v.import_key like 'bench:%' and cp.id % 10 = 0 on conflict do nothing`,
+    );
+    const hasAuthor = (await db.raw(`select 1 from information_schema.columns where table_name = 'messages' and column_name = 'author_user_id'`)).rowCount > 0;
+    if (hasAuthor) {
+      await db.raw(
+        `insert into messages (conversation_id, kind, author_user_id, text, created_at)
+         select cv.id, 'question', c.user_id, 'Is this patch normal?', now() - (cv.id % 72) * interval '1 hour'
+         from conversations cv join care_plans cp on cp.id = cv.plan_id
+         join properties p on p.id = cp.property_id join customers c on c.id = p.customer_id
+         where c.external_ref like 'B-%'`,
+      );
+    }
+  }
+  await db.raw("analyze");
+}
