@@ -19,7 +19,11 @@ export function StaffLayout() {
   const isStaff = Boolean(user && staffRoles.includes(user.role));
   const outboxAvailable = useOutboxAvailable(isStaff);
 
-  const nav: NavItem[] = [{ to: "/", label: "Home", end: true }];
+  // Technicians and managers alike: every staff role may try out a plan.
+  const nav: NavItem[] = [
+    { to: "/", label: "Home", end: true },
+    { to: "/plan-preview", label: "Plan preview" },
+  ];
   if (outboxAvailable) nav.push({ to: "/outbox", label: "Outbox (development)" });
 
   return (

@@ -3,6 +3,7 @@ import { staffRoles } from "#shared/schemas/auth";
 import { NotFoundPage, RequireSignIn, RouteErrorPage } from "#shared/ui/index";
 import { HomeRoute } from "../features/home/home-route.tsx";
 import { OutboxRoute } from "../features/outbox/outbox-route.tsx";
+import { PlanPreviewRoute } from "../features/plan-preview/plan-preview-route.tsx";
 import { SignInRoute } from "../features/sign-in/sign-in-route.tsx";
 import { CustomerOnStaff, PublicLayout, StaffLayout } from "./layouts.tsx";
 import { productLabel } from "./product.ts";
@@ -22,6 +23,7 @@ export const router = createBrowserRouter(
               children: [
                 { index: true, element: <HomeRoute /> },
                 { path: "outbox", element: <OutboxRoute /> },
+                { path: "plan-preview", element: <PlanPreviewRoute /> },
                 { path: "*", element: <NotFoundPage /> },
               ],
             },

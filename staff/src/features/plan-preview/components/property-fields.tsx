@@ -1,0 +1,123 @@
+import { use } from "react";
+import { useFormContext, useWatch } from "react-hook-form";
+import { SPECIES } from "#shared/engine/index";
+import { TextField } from "#shared/ui/index";
+import type { IrrigationKind, LawnCondition, PreviewFormValues } from "../lib/form-values.ts";
+import { FieldErrorsContext, fieldId } from "../lib/field-errors.ts";
+import { IRRIGATION_LABELS, LAWN_CONDITION_LABELS, speciesLabel } from "../lib/labels.ts";
+import { daysAfter } from "../lib/local-dates.ts";
+import { Checkbox } from "./checkbox.tsx";
+import { CheckboxGroup } from "./checkbox-group.tsx";
+import { FieldErrorText } from "./field-error-text.tsx";
+import { FormSection } from "./form-section.tsx";
+import { SelectField } from "./select-field.tsx";
+import { TimeZoneField } from "./time-zone-field.tsx";
+
+/** The lawn, its watering and its mower, and where it is. */
+export function PropertyFields() {
+  const { control, register } = useFormContext<PreviewFormValues>();
+  const errors = use(FieldErrorsContext);
+  const [irrigationKind, visitDate, frost] = useWatch({
+    control,
+    name: ["property.irrigation.kind", "visit.date", "property.expectedFirstFrost"],
+  });
+  const daysToFrost = daysAfter(visitDate, frost);
+  const irrigationError = errors["property.irrigation"];
+
+  return (
+    <FormSection legend="The property">
+      <CheckboxGroup
+        id={fieldId("property.grassType.species")}
+        legend="Grass in the lawn now"
+        hint="Tick what grows there, or leave them all empty and pick the season below."
+        error={errors["property.grassType.species"] ?? errors["property.grassType"]}
+      >
+        {SPECIES.map((species) => (
+          <Checkbox key={species} label={speciesLabel(species)} value={species} {...register("property.grassType.species")} />
+        ))}
+      </CheckboxGroup>
+      <SelectField id={fieldId("property.grassType.season")} label="Grass season" error={errors["property.grassType.season"]} {...register("property.grassType.season")}>
+        <option value="">Work it out from the species</option>
+        <option value="cool">Cool-season</option>
+        <option value="warm">Warm-season</option>
+      </SelectField>
+      <SelectField id={fieldId("property.lawnCondition")} label="Lawn condition" error={errors["property.lawnCondition"]} {...register("property.lawnCondition")}>
+        {(Object.keys(LAWN_CONDITION_LABELS) as LawnCondition[]).map((condition) => (
+          <option key={condition} value={condition}>
+            {LAWN_CONDITION_LABELS[condition]}
+          </option>
+        ))}
+      </SelectField>
+
+      <SelectField id={fieldId("property.irrigation.kind")} label="Watering" error={errors["property.irrigation.kind"]} {...register("property.irrigation.kind")}>
+        {(Object.keys(IRRIGATION_LABELS) as IrrigationKind[]).map((kind) => (
+          <option key={kind} value={kind}>
+            {IRRIGATION_LABELS[kind]}
+          </option>
+        ))}
+      </SelectField>
+      {irrigationKind !== "none" && (
+        <>
+          <TextField
+            id={fieldId("property.irrigation.zones")}
+            label="Zones (optional)"
+            inputMode="numeric"
+            autoComplete="off"
+            error={errors["property.irrigation.zones"]}
+            {...register("property.irrigation.zones")}
+          />
+          <TextField
+            id={fieldId("property.irrigation.precipitationRateInPerHour")}
+            label="Precipitation rate (in/h)"
+            hint="From a catch-cup test. Leave empty if unknown: the program's default is used."
+            inputMode="decimal"
+            autoComplete="off"
+            error={errors["property.irrigation.precipitationRateInPerHour"]}
+            {...register("property.irrigation.precipitationRateInPerHour")}
+          />
+        </>
+      )}
+      {irrigationError && <FieldErrorText message={irrigationError} />}
+
+      <TextField
+          id={fieldId("property.currentMowingHeightIn")}
+          label="Mowing height now (in)"
+          inputMode="decimal"
+          autoComplete="off"
+          error={errors["property.currentMowingHeightIn"]}
+          {...register("property.currentMowingHeightIn")}
+        />
+        <TextField
+          id={fieldId("property.mowerHighestSettingIn")}
+          label="Mower's highest setting (in)"
+          inputMode="decimal"
+          autoComplete="off"
+          error={errors["property.mowerHighestSettingIn"]}
+          {...register("property.mowerHighestSettingIn")}
+        />
+        <TextField
+          id={fieldId("property.mowerSettingStepIn")}
+          label="Mower step (in, optional)"
+          inputMode="decimal"
+          autoComplete="off"
+          error={errors["property.mowerSettingStepIn"]}
+          {...register("property.mowerSettingStepIn")}
+        />
+
+      <TimeZoneField />
+
+      <TextField
+        id={fieldId("property.expectedFirstFrost")}
+        label="Expected first frost (optional)"
+        type="date"
+        hint={
+          daysToFrost !== null
+            ? `${daysToFrost} days after the visit. Leave empty where frost doesn't come.`
+            : "Leave empty where frost doesn't come."
+        }
+        error={errors["property.expectedFirstFrost"]}
+        {...register("property.expectedFirstFrost")}
+      />
+    </FormSection>
+  );
+}
