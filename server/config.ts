@@ -31,6 +31,8 @@ const envSchema = z
 
     /** Where the outbox page reads what the fakes received (development and tests only). */
     FAKES_CONTROL_URL: z.url().optional(),
+    /** Where photos are stored (local-disk adapter); never a folder that is served statically. */
+    PHOTO_DIR: z.string().min(1).default(".data/photos"),
     SIGN_IN_LINK_MINUTES: z.coerce.number().int().min(1).max(60).default(15),
   })
   .superRefine((env, ctx) => {

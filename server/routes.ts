@@ -8,11 +8,26 @@ import { companyRoutes } from "./features/company/routes.ts";
 import { planRoutes } from "./features/plans/routes.ts";
 import { visitRoutes } from "./features/visits/routes.ts";
 import { auditRoutes } from "./features/audit/routes.ts";
+import { questionRoutes } from "./features/questions/routes.ts";
+import { photoRoutes } from "./features/photos/routes.ts";
+import { calendarRoutes } from "./features/calendar/routes.ts";
 
 /**
  * The server's whole API route table. The authorisation matrix test reads it, so a
  * route added here without an expectation there fails that test.
  */
 export function collectRoutes(deps: AppDeps): RouteSpec[] {
-  return [...healthRoutes(deps.db), ...companyRoutes(deps.db), ...authRoutes(deps), ...propertyRoutes(deps.db), ...planRoutes(deps), ...visitRoutes(deps), ...auditRoutes(deps.db), ...devOutboxRoutes(deps.config)];
+  return [
+    ...healthRoutes(deps.db),
+    ...companyRoutes(deps.db),
+    ...authRoutes(deps),
+    ...propertyRoutes(deps.db),
+    ...planRoutes(deps),
+    ...visitRoutes(deps),
+    ...questionRoutes(deps),
+    ...photoRoutes(deps),
+    ...calendarRoutes(deps),
+    ...auditRoutes(deps.db),
+    ...devOutboxRoutes(deps.config),
+  ];
 }

@@ -4,6 +4,7 @@ import { createTestContext, signInCustomer, signInStaff, type TestContext } from
 import { collectRoutes } from "../routes.ts";
 import { createMessenger } from "../messaging/create-messenger.ts";
 import { authorizationMatrix, type Caller, type Outcome } from "./authorization-matrix.ts";
+import { smallWebp } from "../features/photos/testing/images.ts";
 
 type Agent = ReturnType<typeof request.agent>;
 let ctx: TestContext;
@@ -18,10 +19,23 @@ async function recordsOf(ref: string) {
   return { id: property!.id, planId: plan!.id, stepId: Number(step!.id), visitId: plan!.visit_id };
 }
 
+/**
+ * Staff-only records whose path id is not a property, keyed "<path segment>:<param>". Each
+ * is harmless to hit as a manager: the saved reply is a throwaway one (DELETE removes it),
+ * and the user is the manager themselves (deactivating the only manager answers 409).
+ */
+/** Each homeowner asks a question with one photo, so photo routes have a record of each. */
+async function photoOf(agent: Agent, planId: number): Promise<number> {
+  const res = await agent.post(`/api/plans/${planId}/questions`).field("text", "Is this normal?").attach("photos", await smallWebp(), "lawn.webp").expect(201);
+  return res.body.message.photos[0].id;
+}
+
 beforeAll(async () => {
   ctx = await createTestContext();
   records.own = await recordsOf("C-1001");
   records.other = await recordsOf("C-1002");
+  records.own.photoId = await photoOf(await signInCustomer(ctx, "ruth.okonkwo@mail.example"), records.own.planId!);
+  records.other.photoId = await photoOf(await signInCustomer(ctx, "tomasz.brandt@mail.example"), records.other.planId!);
   agents.signedOut = request.agent(ctx.app);
   agents.customerOwn = await signInCustomer(ctx, "ruth.okonkwo@mail.example");
   agents.customerOther = await signInCustomer(ctx, "ruth.okonkwo@mail.example"); // the same homeowner, aimed at Tomasz's records
@@ -40,8 +54,14 @@ const routeTable = () =>
 
 function fillPath(path: string, caller: Caller): string {
   const ids = caller === "customerOther" ? records.other : records.own;
-  // /api/visits/:id is a visit; every other :id here is a property.
-  const idFor = (name: string) => (name === "id" && path.startsWith("/api/visits/") ? ids.visitId! : ids[name]!);
+  const idFor = (name: string): string | number => {
+    if (name === "size") return "thumb";
+    if (name === "file") return "not-a-real-token.ics";
+    // :id is a property unless the path names another kind of record.
+    if (name === "id" && path.startsWith("/api/visits/")) return ids.visitId!;
+    if (name === "id" && path.startsWith("/api/photos/")) return ids.photoId!;
+    return ids[name]!;
+  };
   return path.replace(/:(\w+)/g, (_m, name: string) => String(idFor(name)));
 }
 

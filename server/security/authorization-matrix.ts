@@ -17,6 +17,8 @@ const customerOnly: MatrixRow = { signedOut: 401, customerOwn: "ok", customerOth
 const anyoneSignedIn: MatrixRow = { signedOut: 401, customerOwn: "ok", customerOther: "ok", technician: "ok", manager: "ok", deactivated: 401 };
 /** A customer's own record, or any record of the company for staff. */
 const ownRecordOrStaff: MatrixRow = { signedOut: 401, customerOwn: "ok", customerOther: 404, technician: "ok", manager: "ok", deactivated: 401 };
+/** Reached by a secret token in the URL, never by a session: a made-up token is not found for anyone. */
+const feedByToken: MatrixRow = { signedOut: 404, customerOwn: 404, customerOther: 404, technician: 404, manager: 404, deactivated: 404 };
 /** Only the customer who owns the record. */
 const ownRecordOnly: MatrixRow = { signedOut: 401, customerOwn: "ok", customerOther: 404, technician: 403, manager: 403, deactivated: 401 };
 
@@ -41,6 +43,15 @@ export const authorizationMatrix: Record<string, MatrixRow> = {
   "POST /api/visits": staffOnly,
   "PATCH /api/visits/:id": staffOnly,
   "GET /api/audit": managerOnly,
+  "GET /api/questions/open": staffOnly,
+  "GET /api/plans/:planId/thread": ownRecordOrStaff,
+  "POST /api/plans/:planId/questions": ownRecordOnly,
+  "POST /api/plans/:planId/answers": staffOnly,
+  "GET /api/photos/:id/:size": ownRecordOrStaff,
+  "GET /api/my/calendar": customerOnly,
+  "POST /api/my/calendar/rotate": customerOnly,
+  "GET /calendar/:file": feedByToken,
+  "GET /calendar": feedByToken,
 };
 
-export const matrixKinds = { publicRoute, staffOnly, managerOnly, customerOnly, anyoneSignedIn, ownRecordOrStaff, ownRecordOnly };
+export const matrixKinds = { feedByToken, publicRoute, staffOnly, managerOnly, customerOnly, anyoneSignedIn, ownRecordOrStaff, ownRecordOnly };

@@ -1,0 +1,113 @@
+import ical, { ICalEventTransparency } from "ical-generator";
+import { addDays } from "#shared/engine/dates";
+import { holdOffSchema, type StoredHoldOff } from "#shared/schemas/plans";
+import type { FeedPlan, FeedStep } from "./repo.ts";
+import { buildVTimezone } from "./vtimezone.ts";
+import { wallClock } from "./wall-clock.ts";
+
+export type FeedInput = { companyName: string; plans: readonly FeedPlan[]; steps: readonly FeedStep[] };
+
+/** Calendar apps poll subscribed feeds; a few hours is what they honour anyway. */
+const REFRESH_SECONDS = 4 * 60 * 60;
+/** When a watering step gives no minutes per cycle, show a short slot rather than none. */
+const DEFAULT_CYCLE_MINUTES = 15;
+
+const holdOffTitles: Record<string, string> = {
+  weed_and_feed: "No weed-and-feed",
+  broadleaf_herbicide: "No broadleaf weed killer",
+  crabgrass_pre_emergent: "No crabgrass pre-emergent",
+  high_n_quick_release: "No high-nitrogen quick-release feed",
+  heavy_traffic: "Keep heavy traffic off the new grass",
+};
+const holdOffTitle = (kind: string) => holdOffTitles[kind] ?? `Hold off: ${kind.replaceAll("_", " ")}`;
+
+function stepDescription(content: Record<string, unknown>): string | null {
+  const parts: string[] = [];
+  if (typeof content.detail === "string") parts.push(content.detail);
+  const why = content.why as { text?: unknown; source?: unknown } | undefined;
+  if (why && typeof why.text === "string") parts.push(`Why: ${why.text}${typeof why.source === "string" ? ` (${why.source})` : ""}`);
+  return parts.length > 0 ? parts.join("\n\n") : null;
+}
+
+function wateringTimes(content: Record<string, unknown>): string[] {
+  const times = content.times;
+  return Array.isArray(times) ? times.filter((t): t is string => typeof t === "string" && /^([01]\d|2[0-3]):[0-5]\d$/.test(t)) : [];
+}
+
+/** "HH:MM" plus minutes, kept on the same day (a cycle is never longer than the evening). */
+function addMinutes(time: string, minutes: number): string {
+  const [h, m] = time.split(":").map(Number) as [number, number];
+  const total = Math.min(h * 60 + m + Math.max(1, Math.round(minutes)), 23 * 60 + 59);
+  return `${String(Math.floor(total / 60)).padStart(2, "0")}:${String(total % 60).padStart(2, "0")}`;
+}
+
+const yearOf = (date: string) => Number(date.slice(0, 4));
+
+/**
+ * The homeowner's care plans as an iCalendar feed (RFC 5545): an all-day event per daily
+ * step, a timed event per watering start (in the lawn's own time zone, with its VTIMEZONE),
+ * and each hold-off window as a multi-day all-day event. UIDs come from the steps' stable
+ * keys, so a recomputed plan updates events in place instead of duplicating them.
+ */
+export function buildFeed(input: FeedInput): string {
+  const holdOffs = input.plans.flatMap((plan) =>
+    plan.holdOffs.flatMap((raw) => {
+      const parsed = holdOffSchema.safeParse(raw);
+      return parsed.success ? [{ plan, holdOff: parsed.data as StoredHoldOff }] : [];
+    }),
+  );
+  const years = [...input.steps.map((s) => yearOf(s.date)), ...holdOffs.flatMap(({ holdOff }) => [yearOf(holdOff.start), yearOf(holdOff.end)])];
+  const fromYear = years.length ? Math.min(...years) : new Date().getUTCFullYear();
+  const toYear = years.length ? Math.max(...years) : fromYear;
+
+  const calendar = ical({
+    name: `${input.companyName} – lawn care plan`,
+    description: `Your day-by-day lawn care steps from ${input.companyName}.`,
+    prodId: { company: "Sproutline", product: "care-plan", language: "EN" },
+    // No calendar-wide zone: each timed event names its lawn's zone; the generator adds its VTIMEZONE.
+    timezone: { name: null, generator: (zone) => buildVTimezone(zone, fromYear, toYear) },
+    ttl: REFRESH_SECONDS,
+  });
+  const plansById = new Map(input.plans.map((p) => [p.planId, p]));
+
+  for (const step of input.steps) {
+    const plan = plansById.get(step.planId);
+    if (!plan) continue;
+    const common = {
+      summary: step.title,
+      description: stepDescription(step.content),
+      location: plan.street,
+      transparency: ICalEventTransparency.TRANSPARENT,
+    };
+    const times = wateringTimes(step.content);
+    if (times.length === 0) {
+      calendar.createEvent({ ...common, id: `${step.planId}.${step.key}@sproutline`, allDay: true, start: step.date, end: addDays(step.date, 1) });
+      continue;
+    }
+    const minutes = typeof step.content.minutesPerCycle === "number" ? step.content.minutesPerCycle : DEFAULT_CYCLE_MINUTES;
+    for (const time of times) {
+      calendar.createEvent({
+        ...common,
+        id: `${step.planId}.${step.key}.${time.replace(":", "")}@sproutline`,
+        timezone: plan.timeZone,
+        start: wallClock(step.date, time, plan.timeZone),
+        end: wallClock(step.date, addMinutes(time, minutes), plan.timeZone),
+      });
+    }
+  }
+
+  for (const { plan, holdOff } of holdOffs) {
+    calendar.createEvent({
+      id: `${plan.planId}.hold-off.${holdOff.kind}.${holdOff.start}@sproutline`,
+      summary: holdOffTitle(holdOff.kind),
+      description: `${holdOff.why}\n\nSource: ${holdOff.source}. Always read and follow the product label.`,
+      location: plan.street,
+      allDay: true,
+      start: holdOff.start,
+      // All-day DTEND is exclusive; the hold-off's end date is its last day.
+      end: addDays(holdOff.end, 1),
+      transparency: ICalEventTransparency.TRANSPARENT,
+    });
+  }
+  return calendar.toString();
+}
