@@ -8,6 +8,12 @@ import { companyRoutes } from "./features/company/routes.ts";
 import { planRoutes } from "./features/plans/routes.ts";
 import { visitRoutes } from "./features/visits/routes.ts";
 import { auditRoutes } from "./features/audit/routes.ts";
+import { followUpRoutes } from "./features/follow-ups/routes.ts";
+import { callbackReportRoutes } from "./features/callback-report/routes.ts";
+import { teamRoutes } from "./features/team/routes.ts";
+import { savedReplyRoutes } from "./features/saved-replies/routes.ts";
+import { customerRoutes } from "./features/customers/routes.ts";
+import { visitImportRoutes } from "./features/visit-import/routes.ts";
 import { questionRoutes } from "./features/questions/routes.ts";
 import { photoRoutes } from "./features/photos/routes.ts";
 import { calendarRoutes } from "./features/calendar/routes.ts";
@@ -28,6 +34,12 @@ export function collectRoutes(deps: AppDeps): RouteSpec[] {
     ...photoRoutes(deps),
     ...calendarRoutes(deps),
     ...auditRoutes(deps.db),
+    ...followUpRoutes(deps.db),
+    ...callbackReportRoutes(deps.db),
+    ...teamRoutes(deps),
+    ...savedReplyRoutes(deps.db),
+    ...customerRoutes(deps.db),
+    ...visitImportRoutes(deps.db),
     ...devOutboxRoutes(deps.config),
   ];
 }

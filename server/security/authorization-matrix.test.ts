@@ -24,6 +24,16 @@ async function recordsOf(ref: string) {
  * is harmless to hit as a manager: the saved reply is a throwaway one (DELETE removes it),
  * and the user is the manager themselves (deactivating the only manager answers 409).
  */
+const staffRecordIds: Record<string, number> = {};
+async function makeStaffRecords() {
+  const ruth = await ctx.db("customers").where({ external_ref: "C-1001" }).first<{ id: number; company_id: number }>("id", "company_id");
+  const manager = await ctx.db("users").where({ email: "dana@cobblefield.example" }).first<{ id: number }>("id");
+  const [followUp] = await ctx.db("follow_up_visits").insert({ property_id: records.own.id, plan_id: records.own.planId, reason: "other", created_by: manager!.id }).returning<{ id: number }[]>("id");
+  const [reply] = await ctx.db("saved_replies").insert({ company_id: ruth!.company_id, title: `matrix ${Date.now()}`, body: "Hello {{firstName}}" }).returning<{ id: number }[]>("id");
+  const [batch] = await ctx.db("import_batches").insert({ company_id: ruth!.company_id, file_sha256: `matrix ${Date.now()}` }).returning<{ id: number }[]>("id");
+  Object.assign(staffRecordIds, { "follow-ups:id": followUp!.id, "customers:id": ruth!.id, "saved-replies:id": reply!.id, "team:userId": manager!.id, "visit-imports:batchId": batch!.id });
+}
+
 /** Each homeowner asks a question with one photo, so photo routes have a record of each. */
 async function photoOf(agent: Agent, planId: number): Promise<number> {
   const res = await agent.post(`/api/plans/${planId}/questions`).field("text", "Is this normal?").attach("photos", await smallWebp(), "lawn.webp").expect(201);
@@ -36,6 +46,7 @@ beforeAll(async () => {
   records.other = await recordsOf("C-1002");
   records.own.photoId = await photoOf(await signInCustomer(ctx, "ruth.okonkwo@mail.example"), records.own.planId!);
   records.other.photoId = await photoOf(await signInCustomer(ctx, "tomasz.brandt@mail.example"), records.other.planId!);
+  await makeStaffRecords();
   agents.signedOut = request.agent(ctx.app);
   agents.customerOwn = await signInCustomer(ctx, "ruth.okonkwo@mail.example");
   agents.customerOther = await signInCustomer(ctx, "ruth.okonkwo@mail.example"); // the same homeowner, aimed at Tomasz's records
@@ -57,6 +68,8 @@ function fillPath(path: string, caller: Caller): string {
   const idFor = (name: string): string | number => {
     if (name === "size") return "thumb";
     if (name === "file") return "not-a-real-token.ics";
+    const staffRecord = staffRecordIds[`${path.split("/")[2]}:${name}`];
+    if (staffRecord !== undefined) return staffRecord;
     // :id is a property unless the path names another kind of record.
     if (name === "id" && path.startsWith("/api/visits/")) return ids.visitId!;
     if (name === "id" && path.startsWith("/api/photos/")) return ids.photoId!;
