@@ -20,7 +20,7 @@ type HeaderRow = {
 
 export type PlanRow = HeaderRow & {
   company_id: number;
-  input: PlanInputRaw;
+  customer_id: number;
   observations: unknown[];
   hold_offs: Plan["holdOffs"];
   warnings: Plan["warnings"];
@@ -81,7 +81,7 @@ export async function plansOfCustomer(db: Db, customerId: number): Promise<PlanH
 
 export async function loadPlanRow(db: Db, planId: number): Promise<PlanRow | undefined> {
   return (await headerQuery(db)
-    .select("customers.company_id", "care_plans.input", "care_plans.observations", "care_plans.hold_offs", "care_plans.warnings", "care_plans.figures")
+    .select("customers.company_id", "customers.id as customer_id", "care_plans.hold_offs", "care_plans.warnings", "care_plans.figures")
     .where("care_plans.id", planId)
     .first()) as PlanRow | undefined;
 }

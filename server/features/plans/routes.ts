@@ -63,8 +63,7 @@ export function planRoutes(deps: AppDeps, onChange?: PlanChangeHook): RouteSpec[
       access: everyone,
       params: planIdParamsSchema,
       handler: async ({ user, params }) => {
-        await findPlanForUser(db, user, params.planId);
-        return todayView(db, params.planId);
+        return todayView(db, user, params.planId);
       },
     }),
     route({

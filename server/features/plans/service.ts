@@ -4,6 +4,7 @@ import type { Db } from "../../db.ts";
 import { HttpError, notFound } from "../../http/errors.ts";
 import { localDateAt } from "../../lib/local-date.ts";
 import { loadVisitWithProperty, type VisitWithProperty } from "../visits/repo.ts";
+import type { SessionUser } from "../../auth/session-user.ts";
 import { currentProgram, programVersion } from "./program-repo.ts";
 import * as plans from "./plans-repo.ts";
 import * as steps from "./steps-repo.ts";
@@ -84,21 +85,28 @@ export async function loadStoredPlan(db: Db, planId: number): Promise<StoredPlan
   };
 }
 
-const milestoneKinds = new Set(["mow", "check_in_photo", "feed"]);
+const milestoneKinds = ["mow", "check_in_photo", "feed"];
 
-/** Today's steps, active hold-offs and the next milestone, in the lawn's own time zone. */
-export async function todayView(db: Db, planId: number, now = new Date()): Promise<TodayResponse> {
-  const plan = await loadStoredPlan(db, planId);
-  const today = localDateAt(plan.timeZone, now);
-  const upcoming = plan.steps.find((s) => s.date > today && milestoneKinds.has(s.kind));
-  const { steps: allSteps, holdOffs, warnings, cautions, phases: _p, firstMowDate: _f, figures: _g, ...header } = plan;
+/**
+ * Today's steps, active hold-offs and the next milestone, in the lawn's own time zone.
+ * The homeowner's most frequent request: it checks access on the plan row it loads anyway
+ * and reads only today's and the upcoming milestone steps.
+ */
+export async function todayView(db: Db, user: SessionUser, planId: number, now = new Date()): Promise<TodayResponse> {
+  const row = await plans.loadPlanRow(db, planId);
+  if (!row || row.company_id !== user.companyId || (user.role === "customer" && row.customer_id !== user.customerId)) {
+    throw notFound("That care plan");
+  }
+  const today = localDateAt(row.time_zone, now);
+  const rows = await steps.stepsForToday(db, planId, today, milestoneKinds);
+  const upcoming = rows.find((s) => s.date > today);
   return {
     today,
-    plan: header,
-    steps: allSteps.filter((s) => s.date === today),
-    activeHoldOffs: holdOffs.filter((h) => h.start <= today && today <= h.end),
+    plan: plans.toHeader(row),
+    steps: rows.filter((s) => s.date === today).map(steps.toStoredStep),
+    activeHoldOffs: row.hold_offs.filter((h) => h.start <= today && today <= h.end).map((h) => ({ ...h, cautions: [...h.cautions] })),
     nextMilestone: upcoming ? { kind: upcoming.kind, date: upcoming.date, title: upcoming.title } : null,
-    warnings,
-    cautions,
+    warnings: [...row.warnings],
+    cautions: row.figures.cautions.map((c) => ({ ...c })),
   };
 }

@@ -88,6 +88,15 @@ export async function stepsOfPlanOn(db: Db, planId: number, date: string): Promi
   return db("plan_steps").where({ plan_id: planId, date }).orderBy("id").select<StepRow[]>(stepColumns);
 }
 
+/** Today's steps and the upcoming ones of the given kinds, in date order: what the Today screen needs. */
+export async function stepsForToday(db: Db, planId: number, today: string, milestoneKinds: readonly string[]): Promise<StepRow[]> {
+  return db("plan_steps")
+    .where({ plan_id: planId })
+    .andWhere((q) => q.where("date", today).orWhere((m) => m.where("date", ">", today).whereIn("kind", milestoneKinds)))
+    .orderBy([{ column: "date" }, { column: "id" }])
+    .select<StepRow[]>(stepColumns);
+}
+
 export async function findStep(db: Db, planId: number, stepId: number): Promise<StepRow | undefined> {
   return db("plan_steps").where({ plan_id: planId, id: stepId }).first<StepRow | undefined>(stepColumns);
 }
