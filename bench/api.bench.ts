@@ -23,17 +23,35 @@ const connections = 100;
 const durationSeconds = Number(process.env.BENCH_SECONDS ?? 10);
 
 const cluster = await ensurePostgres({ port: postgresPort });
-await ensureDatabase(cluster, "sproutline_bench_api", { fresh: true });
+await ensureDatabase(cluster, "sproutline_bench_api");
 const databaseUrl = cluster.url("sproutline_bench_api");
-const db = createDb(databaseUrl);
-await db.migrate.latest();
-await db.seed.run();
-const company = await db("companies").orderBy("id").first<{ id: number }>("id");
+let db = createDb(databaseUrl);
+
+/** Generating 3M rows takes minutes: reuse the data of an earlier run when the schema is unchanged. */
+async function reusableData(): Promise<boolean> {
+  const [, pending] = (await db.migrate.list()) as [unknown[], unknown[]];
+  if (pending.length > 0 || !(await db.schema.hasTable("plan_steps"))) return false;
+  const count = Number((await db("plan_steps").count<{ count: string }[]>("* as count"))[0]!.count);
+  return count >= benchSize.customers * benchSize.stepsPerPlan;
+}
+
 let started = Date.now();
-await generateBenchData(db, company!.id);
-const generationSeconds = (Date.now() - started) / 1000;
+let generationSeconds = 0;
+if (process.env.BENCH_FRESH_DATA === "1" || !(await reusableData())) {
+  await db.destroy();
+  await ensureDatabase(cluster, "sproutline_bench_api", { fresh: true });
+  db = createDb(databaseUrl);
+  await db.migrate.latest();
+  await db.seed.run();
+  const seededCompany = await db("companies").orderBy("id").first<{ id: number }>("id");
+  await generateBenchData(db, seededCompany!.id);
+  generationSeconds = (Date.now() - started) / 1000;
+} else {
+  console.log("reusing the data of an earlier run (BENCH_FRESH_DATA=1 to regenerate)");
+}
+const company = await db("companies").orderBy("id").first<{ id: number }>("id");
 const stepCount = Number((await db("plan_steps").count<{ count: string }[]>("* as count"))[0]!.count);
-console.log(`data: ${benchSize.customers} homeowners, ${stepCount} plan steps, generated in ${generationSeconds.toFixed(0)} s`);
+console.log(`data: ${benchSize.customers} homeowners, ${stepCount} plan steps${generationSeconds ? `, generated in ${generationSeconds.toFixed(0)} s` : ""}`);
 
 const fakes = await startFakes({ oauth: { accounts: fakeOAuthAccounts } });
 const server = spawn(process.execPath, ["--import", "tsx", "bench/api/server.ts"], {
