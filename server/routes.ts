@@ -17,6 +17,7 @@ import { visitImportRoutes } from "./features/visit-import/routes.ts";
 import { questionRoutes } from "./features/questions/routes.ts";
 import { photoRoutes } from "./features/photos/routes.ts";
 import { calendarRoutes } from "./features/calendar/routes.ts";
+import { programRoutes } from "./features/programs/routes.ts";
 
 /**
  * The server's whole API route table. The authorisation matrix test reads it, so a
@@ -33,6 +34,7 @@ export function collectRoutes(deps: AppDeps): RouteSpec[] {
     ...questionRoutes(deps),
     ...photoRoutes(deps),
     ...calendarRoutes(deps),
+    ...programRoutes(deps.db),
     ...auditRoutes(deps.db),
     ...followUpRoutes(deps.db),
     ...callbackReportRoutes(deps.db),

@@ -43,6 +43,7 @@ export const authorizationMatrix: Record<string, MatrixRow> = {
   "POST /api/visits": staffOnly,
   "PATCH /api/visits/:id": staffOnly,
   "GET /api/audit": managerOnly,
+  "POST /api/programs": managerOnly,
   "GET /api/questions/open": staffOnly,
   "GET /api/plans/:planId/thread": ownRecordOrStaff,
   "POST /api/plans/:planId/questions": ownRecordOnly,
