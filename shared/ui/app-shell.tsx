@@ -66,16 +66,16 @@ export function AppShell({ productLabel, homeTo = "/", nav, actions, children }:
                 </button>
                 <div
                   id={menuId}
-                  className={`${menuOpen ? "flex" : "hidden"} w-full flex-col gap-2 pb-2 md:flex md:w-auto md:flex-1 md:flex-row md:items-center md:pb-0`}
+                  className={`${menuOpen ? "flex" : "hidden"} w-full flex-col gap-2 pb-2 md:flex md:w-full md:flex-row md:items-center md:pb-1`}
                 >
                   <nav aria-label="Main" className="md:flex-1">
-                    <ul className="flex flex-col gap-1 md:flex-row">
+                    <ul className="flex flex-col gap-1 md:flex-row md:flex-wrap">
                       {nav!.map((item) => (
                         <li key={item.to}>
                           <NavLink
                             to={item.to}
                             end={item.end}
-                            className="flex min-h-11 items-center rounded-lg px-3 font-semibold text-ink no-underline hover:bg-pine-50 aria-[current=page]:bg-pine-100 aria-[current=page]:text-pine-900"
+                            className="flex min-h-11 items-center rounded-lg px-3 font-semibold whitespace-nowrap text-ink no-underline hover:bg-pine-50 aria-[current=page]:bg-pine-100 aria-[current=page]:text-pine-900"
                           >
                             {item.label}
                           </NavLink>

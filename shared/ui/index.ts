@@ -20,3 +20,14 @@ export { RequireSignIn, type RequireSignInProps } from "./session/require-sign-i
 export { roleLabel } from "./role-label.ts";
 export { SignOutButton } from "./session/sign-out-button.tsx";
 export { NotFoundPage, RouteErrorPage } from "./route-error.tsx";
+export { Dialog, type DialogProps } from "./dialog.tsx";
+export { ConfirmDialog, type ConfirmDialogProps } from "./confirm-dialog.tsx";
+export { SelectField, type SelectFieldProps, type SelectOption } from "./select-field.tsx";
+export { CheckboxField, type CheckboxFieldProps } from "./checkbox-field.tsx";
+export { TextAreaField, type TextAreaFieldProps } from "./textarea-field.tsx";
+export { RequireRole, type RequireRoleProps } from "./session/require-role.tsx";
+export { apiPostForm } from "./api-upload.ts";
+export { formatCalendarDay, todayInZone, localToday, relativeDay, waitingTime } from "./calendar-days.ts";
+export { describePlanDay, type PlanDay } from "./plan-day.ts";
+export { FieldError } from "./field-error.tsx";
+export { SERVICE_LABELS, serviceLabel, speciesLabel } from "./service-labels.ts";

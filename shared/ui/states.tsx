@@ -17,16 +17,29 @@ export interface ErrorStateProps {
   /** Shown as a "Try again" button, e.g. a query's refetch. */
   onRetry?: () => void;
   retrying?: boolean;
+  /** Overrides the error's own message, e.g. with a translated one. */
+  message?: string;
+  /** Labels of the retry button, for apps that translate their chrome. */
+  retryLabel?: string;
+  retryingLabel?: string;
 }
 
-export function ErrorState({ title = "This didn't load", error, onRetry, retrying }: ErrorStateProps) {
+export function ErrorState({
+  title = "This didn't load",
+  error,
+  onRetry,
+  retrying,
+  message,
+  retryLabel = "Try again",
+  retryingLabel = "Trying again…",
+}: ErrorStateProps) {
   return (
     <div role="alert" className="rounded-lg border-l-4 border-rust-700 bg-rust-50 p-4">
       <p className="font-bold text-rust-700">{title}</p>
-      <p className="mt-1 text-rust-700">{errorMessage(error)}</p>
+      <p className="mt-1 text-rust-700">{message ?? errorMessage(error)}</p>
       {onRetry && (
-        <Button variant="secondary" className="mt-3" onClick={onRetry} pending={retrying} pendingLabel="Trying again…">
-          Try again
+        <Button variant="secondary" className="mt-3" onClick={onRetry} pending={retrying} pendingLabel={retryingLabel}>
+          {retryLabel}
         </Button>
       )}
     </div>

@@ -1,14 +1,28 @@
-import { QueryClientProvider } from "@tanstack/react-query";
-import { useState } from "react";
+import { PersistQueryClientProvider } from "@tanstack/react-query-persist-client";
+import { useEffect, useState } from "react";
 import { RouterProvider } from "react-router-dom";
 import { createQueryClient } from "#shared/ui/index";
+import { dropSavedCopyOnSignOut, keepQueriesForOffline, persistOptions } from "../common/api/offline-cache.ts";
 import { router } from "./router.tsx";
 
+function createPortalQueryClient() {
+  const queryClient = createQueryClient();
+  keepQueriesForOffline(queryClient);
+  return queryClient;
+}
+
 export function Providers() {
-  const [queryClient] = useState(createQueryClient);
+  const [queryClient] = useState(createPortalQueryClient);
+  useEffect(() => dropSavedCopyOnSignOut(queryClient), [queryClient]);
   return (
-    <QueryClientProvider client={queryClient}>
+    <PersistQueryClientProvider
+      client={queryClient}
+      persistOptions={persistOptions}
+      // A saved copy may predate the last change (a reload right after ticking a step):
+      // show it at once, but always ask the server again.
+      onSuccess={() => void queryClient.invalidateQueries()}
+    >
       <RouterProvider router={router} />
-    </QueryClientProvider>
+    </PersistQueryClientProvider>
   );
 }

@@ -1,8 +1,10 @@
 import { useEffect, useRef } from "react";
+import { useTranslation } from "react-i18next";
 import { Navigate, useSearchParams } from "react-router-dom";
 import { signInLinkConsumeSchema } from "#shared/schemas/auth";
 import { ErrorState, LoadingState, Page, isApiRequestError } from "#shared/ui/index";
 import { useConsumeSignInLink } from "./api/consume-link.ts";
+import { useErrorText } from "../../common/lib/use-error-text.ts";
 import { LinkProblem } from "./components/link-problem.tsx";
 
 // invalid_input: the server's schema refused the token, which to a person is a broken link.
@@ -10,9 +12,11 @@ const linkProblemCodes = new Set(["link_invalid", "link_expired", "link_used", "
 
 /** Landing page of the e-mailed/texted link: signs in once, then opens the care plan. */
 export function VerifyRoute() {
+  const { t } = useTranslation();
   const [searchParams] = useSearchParams();
   const parsed = signInLinkConsumeSchema.safeParse({ token: searchParams.get("token") ?? "" });
   const consume = useConsumeSignInLink();
+  const errorText = useErrorText();
   const started = useRef(false);
 
   // A link works once: the ref keeps StrictMode's second effect run from sending it again.
@@ -34,14 +38,22 @@ export function VerifyRoute() {
       isApiRequestError(error) && linkProblemCodes.has(error.code) ? (
         <LinkProblem code={error.code} />
       ) : (
-        <ErrorState title="Something got in the way" error={error} onRetry={() => consume.mutate(parsed.data)} retrying={consume.isPending} />
+        <ErrorState
+          title={t("signIn.problemOther")}
+          error={error}
+          message={errorText(error)}
+          onRetry={() => consume.mutate(parsed.data)}
+          retrying={consume.isPending}
+          retryLabel={t("common.tryAgain")}
+          retryingLabel={t("common.tryingAgain")}
+        />
       );
   } else {
-    body = <LoadingState label="Signing you in…" />;
+    body = <LoadingState label={t("signIn.verifyLoading")} />;
   }
 
   return (
-    <Page title={failed ? "Sign-in link problem" : "Signing in"} heading={failed ? "We couldn't sign you in" : "Signing you in"}>
+    <Page title={failed ? t("signIn.problemTitle") : t("signIn.verifyTitle")} heading={failed ? t("signIn.problemHeading") : t("signIn.verifyHeading")}>
       {body}
     </Page>
   );

@@ -1,6 +1,7 @@
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
+import { useTranslation } from "react-i18next";
 import { signInLinkRequestSchema, type SignInLinkRequest } from "#shared/schemas/auth";
 import { Button, Notice, TextField, applyServerErrors } from "#shared/ui/index";
 import { useRequestSignInLink } from "../api/request-link.ts";
@@ -11,6 +12,7 @@ export interface RequestLinkFormProps {
 }
 
 export function RequestLinkForm({ defaultContact = "", onSent }: RequestLinkFormProps) {
+  const { t } = useTranslation();
   const requestLink = useRequestSignInLink();
   const [formError, setFormError] = useState<string | null>(null);
   const form = useForm<SignInLinkRequest>({
@@ -29,8 +31,8 @@ export function RequestLinkForm({ defaultContact = "", onSent }: RequestLinkForm
   return (
     <form onSubmit={onSubmit} noValidate className="flex flex-col gap-5">
       <TextField
-        label="E-mail address or mobile number"
-        hint="Use the one your lawn-care company has for you."
+        label={t("signIn.contactLabel")}
+        hint={t("signIn.contactHint")}
         autoComplete="username"
         inputMode="email"
         autoCapitalize="none"
@@ -39,8 +41,8 @@ export function RequestLinkForm({ defaultContact = "", onSent }: RequestLinkForm
         {...form.register("contact")}
       />
       {formError && <Notice tone="danger">{formError}</Notice>}
-      <Button type="submit" pending={requestLink.isPending} pendingLabel="Sending your link…" className="w-full sm:w-auto sm:self-start">
-        Send me a sign-in link
+      <Button type="submit" pending={requestLink.isPending} pendingLabel={t("signIn.sending")} className="w-full sm:w-auto sm:self-start">
+        {t("signIn.send")}
       </Button>
     </form>
   );

@@ -1,13 +1,12 @@
+import { useTranslation } from "react-i18next";
 import { EmptyState } from "#shared/ui/index";
 
 /** Honest until the first visit is logged: there is no plan yet, and we say what will come. */
-export function CarePlanEmpty({ companyName }: { companyName: string }) {
+export function NoPlanYet({ companyName }: { companyName: string }) {
+  const { t } = useTranslation();
   return (
-    <EmptyState title="Your care plan appears here after your next visit" icon={<CalendarSprout />}>
-      <p>
-        After {companyName} overseeds, aerates or feeds your lawn, you'll find today's steps here: how long to water, when to
-        mow, and what to hold off on.
-      </p>
+    <EmptyState title={t("today.noPlan.title")} icon={<CalendarSprout />}>
+      <p>{t("today.noPlan.body", { company: companyName })}</p>
     </EmptyState>
   );
 }
