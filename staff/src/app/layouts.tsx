@@ -1,6 +1,6 @@
-import { Outlet } from "react-router-dom";
+import { Link, Outlet } from "react-router-dom";
 import { staffRoles, type CurrentUser } from "#shared/schemas/auth";
-import { AppShell, Page, SignOutButton, buttonClasses, useMe, type NavItem } from "#shared/ui/index";
+import { AppShell, Page, RequireRole, SignOutButton, buttonClasses, useMe, type NavItem } from "#shared/ui/index";
 import { useOutboxAvailable } from "../features/outbox/api/get-outbox.ts";
 import { productLabel } from "./product.ts";
 
@@ -13,6 +13,16 @@ export function PublicLayout() {
   );
 }
 
+/** Manager screens; technicians don't see them in the navigation. */
+const managerNav: NavItem[] = [
+  { to: "/follow-ups", label: "Follow-ups" },
+  { to: "/reports/callbacks", label: "Callback report" },
+  { to: "/programs", label: "Programs" },
+  { to: "/team", label: "Team" },
+  { to: "/import", label: "Import" },
+  { to: "/audit", label: "Audit log" },
+];
+
 /** Signed-in staff pages: main navigation (a menu on phones) and sign out. */
 export function StaffLayout() {
   const { data: user } = useMe();
@@ -22,8 +32,12 @@ export function StaffLayout() {
   // Technicians and managers alike: every staff role may try out a plan.
   const nav: NavItem[] = [
     { to: "/", label: "Home", end: true },
+    { to: "/questions", label: "Questions" },
+    { to: "/visits/new", label: "Log a visit" },
+    { to: "/customers", label: "Customers" },
     { to: "/plan-preview", label: "Plan preview" },
   ];
+  if (user?.role === "manager") nav.push(...managerNav);
   if (outboxAvailable) nav.push({ to: "/outbox", label: "Outbox (development)" });
 
   return (
@@ -52,5 +66,21 @@ export function CustomerOnStaff({ user }: { user: CurrentUser }) {
         Open my care plan
       </a>
     </Page>
+  );
+}
+
+/** Layout route for manager screens: a technician who opens one by address gets a plain explanation. */
+export function ManagersOnly() {
+  return (
+    <RequireRole
+      roles={["manager"]}
+      deniedTitle="Managers only"
+      deniedMessage="This page is for managers of your company. Ask a manager if you need something from it."
+      deniedAction={
+        <Link to="/" className={buttonClasses("primary")}>
+          Go to the start page
+        </Link>
+      }
+    />
   );
 }

@@ -1,0 +1,78 @@
+import { useSearchParams } from "react-router-dom";
+import { EmptyState, ErrorState, LoadingState, Page, useSignedInUser } from "#shared/ui/index";
+import { useOpenQuestions } from "./api/get-open-questions.ts";
+import { useQueuePlans } from "./api/get-plan.ts";
+import { QueueCards } from "./components/queue-cards.tsx";
+import { QueueFilters } from "./components/queue-filters.tsx";
+import { QueueTable } from "./components/queue-table.tsx";
+import { QUEUE_FILTER_LABELS, buildRows, countByFilter, countByService, filterRows, isQueueFilter, type QueueFilter } from "./lib/queue-rows.ts";
+import { useNow } from "./lib/use-now.ts";
+
+/** The question queue: homeowners' open questions, oldest waiting at the top. */
+export function QuestionQueueRoute() {
+  const user = useSignedInUser();
+  const now = useNow();
+  const questions = useOpenQuestions();
+  const planIds = [...new Set((questions.data ?? []).map((q) => q.planId))];
+  const { plans, failed } = useQueuePlans(planIds);
+
+  const [params, setParams] = useSearchParams();
+  const filterParam = params.get("show");
+  const filter: QueueFilter = isQueueFilter(filterParam) ? filterParam : "all";
+  const service = params.get("service") || null;
+  const setParam = (key: string, value: string | null) =>
+    setParams(
+      (current) => {
+        const next = new URLSearchParams(current);
+        if (value) next.set(key, value);
+        else next.delete(key);
+        return next;
+      },
+      { replace: true },
+    );
+
+  const rows = buildRows(questions.data ?? [], plans, failed, now);
+  const shown = filterRows(rows, filter, service, user.id);
+
+  return (
+    <Page title="Question queue" width="wide" intro="Homeowners' open questions, oldest waiting at the top. Answer them, or book a follow-up visit.">
+      {questions.isPending && <LoadingState label="Loading questions…" />}
+      {questions.isError && (
+        <ErrorState title="The question queue didn't load" error={questions.error} onRetry={() => void questions.refetch()} retrying={questions.isRefetching} />
+      )}
+      {questions.data && (
+        <div className="flex flex-col gap-5">
+          <QueueFilters
+            filter={filter}
+            service={service}
+            filterCounts={countByFilter(rows, service, user.id)}
+            serviceCounts={countByService(rows, filter, user.id)}
+            onFilterChange={(f) => setParam("show", f === "all" ? null : f)}
+            onServiceChange={(s) => setParam("service", s)}
+          />
+          <p role="status" className="text-ink-soft">
+            {shown.length === rows.length ? `${rows.length} open ${rows.length === 1 ? "question" : "questions"}` : `Showing ${shown.length} of ${rows.length} open questions`}
+          </p>
+          {rows.length === 0 ? (
+            <EmptyState title="No open questions">
+              <p>Every homeowner's question has an answer. New ones show up here by themselves.</p>
+            </EmptyState>
+          ) : shown.length === 0 ? (
+            <EmptyState title={`No questions under “${QUEUE_FILTER_LABELS[filter]}”`}>
+              <p>Try another filter or any service type.</p>
+            </EmptyState>
+          ) : (
+            <>
+              <div className="hidden md:block">
+                <QueueTable rows={shown} now={now} />
+              </div>
+              <div className="md:hidden">
+                <QueueCards rows={shown} now={now} />
+              </div>
+            </>
+          )}
+        </div>
+      )}
+    </Page>
+  );
+}

@@ -1,0 +1,83 @@
+import type { Service, Species } from "#shared/engine/index";
+import { localToday } from "#shared/ui/index";
+
+/*
+ * The form keeps what was typed, as text; it is turned into the API's numbers on save
+ * (lib/to-log-visit.ts). Paths mirror the API body ("visit.seedMix.0.percent"), so the
+ * server's field errors land on the right inputs without translation.
+ */
+export interface SeedRow {
+  species: Species | "";
+  percent: string;
+  purityPct: string;
+  germinationPct: string;
+}
+
+export interface ProductRow {
+  name: string;
+  analysis: { n: string; p: string; k: string };
+  rateLbPer1000: string;
+  quickReleaseN: boolean;
+  /** Only for the live bag count; not part of the visit. */
+  bagLb: string;
+}
+
+export const WIND_DIRECTIONS = ["calm", "N", "NE", "E", "SE", "S", "SW", "W", "NW", "variable"] as const;
+
+export interface ApplicationRecord {
+  product: string;
+  epaRegistrationNo: string;
+  stateRegistrationNo: string;
+  rate: string;
+  areaTreated: string;
+  target: string;
+  applicatorName: string;
+  licenceNo: string;
+}
+
+export interface VisitFormValues {
+  propertyId: string;
+  visit: {
+    date: string;
+    services: Service[];
+    seedMix: SeedRow[];
+    seedRateLbPer1000: string;
+    areaFt2: string;
+    products: ProductRow[];
+  };
+  seedBagLb: string;
+  conditions: { temperatureF: string; windMph: string; windDirection: string };
+  notes: string;
+  regulated: boolean;
+  application: ApplicationRecord;
+}
+
+export const emptySeedRow = (): SeedRow => ({ species: "", percent: "", purityPct: "", germinationPct: "" });
+export const emptyProductRow = (): ProductRow => ({ name: "", analysis: { n: "", p: "", k: "" }, rateLbPer1000: "", quickReleaseN: false, bagLb: "50" });
+export const emptyApplication = (): ApplicationRecord => ({
+  product: "",
+  epaRegistrationNo: "",
+  stateRegistrationNo: "",
+  rate: "",
+  areaTreated: "",
+  target: "",
+  applicatorName: "",
+  licenceNo: "",
+});
+
+export function defaultVisitForm(applicatorName = ""): VisitFormValues {
+  return {
+    propertyId: "",
+    visit: { date: localToday(), services: [], seedMix: [], seedRateLbPer1000: "", areaFt2: "", products: [] },
+    seedBagLb: "50",
+    conditions: { temperatureF: "", windMph: "", windDirection: "" },
+    notes: "",
+    regulated: false,
+    application: { ...emptyApplication(), applicatorName },
+  };
+}
+
+/** "visit.seedMix.0.percent" → "visit-log-visit-seedMix-0-percent": an element id for focusing a field. */
+export function fieldId(path: string): string {
+  return `visit-log-${path.replace(/\./g, "-")}`;
+}
