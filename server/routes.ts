@@ -7,6 +7,10 @@ import { propertyRoutes } from "./features/properties/routes.ts";
 import { companyRoutes } from "./features/company/routes.ts";
 import { planRoutes } from "./features/plans/routes.ts";
 import { visitRoutes } from "./features/visits/routes.ts";
+import { reminderPlanHook } from "./features/reminders/reconcile.ts";
+import { reminderRoutes } from "./features/reminders/routes.ts";
+import { preferencesRoutes } from "./features/preferences/routes.ts";
+import { smsWebhookRoutes } from "./features/sms-webhooks/routes.ts";
 import { auditRoutes } from "./features/audit/routes.ts";
 import { followUpRoutes } from "./features/follow-ups/routes.ts";
 import { callbackReportRoutes } from "./features/callback-report/routes.ts";
@@ -29,19 +33,22 @@ export function collectRoutes(deps: AppDeps): RouteSpec[] {
     ...companyRoutes(deps.db),
     ...authRoutes(deps),
     ...propertyRoutes(deps.db),
-    ...planRoutes(deps),
-    ...visitRoutes(deps),
+    ...planRoutes(deps, reminderPlanHook),
+    ...visitRoutes(deps, reminderPlanHook),
     ...questionRoutes(deps),
     ...photoRoutes(deps),
     ...calendarRoutes(deps),
     ...programRoutes(deps.db),
+    ...reminderRoutes(deps),
+    ...preferencesRoutes(deps),
+    ...smsWebhookRoutes(deps),
     ...auditRoutes(deps.db),
     ...followUpRoutes(deps.db),
     ...callbackReportRoutes(deps.db),
     ...teamRoutes(deps),
     ...savedReplyRoutes(deps.db),
     ...customerRoutes(deps.db),
-    ...visitImportRoutes(deps.db),
+    ...visitImportRoutes(deps.db, reminderPlanHook),
     ...devOutboxRoutes(deps.config),
   ];
 }

@@ -115,7 +115,7 @@ export async function startStack(options: StackOptions): Promise<RunningStack> {
   }, quiet);
   await waitFor(`${fakesControlUrl}/__messages`, "the local fakes");
 
-  const server = startChild("server", "server/main.ts", {
+  const serverEnv = {
     ...shared,
     PORT: String(ports.app),
     PUBLIC_URL: appUrl,
@@ -127,8 +127,11 @@ export async function startStack(options: StackOptions): Promise<RunningStack> {
     GOOGLE_AUTH_BASE_URL: `http://127.0.0.1:${ports.oauth}`,
     FAKES_CONTROL_URL: fakesControlUrl,
     SERVE_APPS: options.apps,
-  }, quiet);
+  };
+  const server = startChild("server", "server/main.ts", serverEnv, quiet);
   await waitFor(`http://127.0.0.1:${ports.app}/api/health`, "the Sproutline server");
+  // The reminder worker (server/worker.ts) runs beside the server with the same settings.
+  const worker = startChild("worker", "server/worker.ts", serverEnv, quiet);
 
   return {
     appUrl,
@@ -136,6 +139,7 @@ export async function startStack(options: StackOptions): Promise<RunningStack> {
     databaseUrl,
     stop: async () => {
       stopping = true;
+      await stopChild(worker);
       await stopChild(server);
       await stopChild(fakes);
       if (cluster.startedHere) cluster.stop();

@@ -6,6 +6,7 @@ import { DeliverySimulator } from "./sms-delivery.ts";
 import { SmsFaultPolicy, isInvalidNumber, smsFaultSettingsSchema, type SmsFaultSettings } from "./sms-faults.ts";
 import { deliverInbound, optOutChange, type InboundResult } from "./sms-inbound.ts";
 import { renderInboundForm, renderInboundResult } from "./sms-inbound-page.ts";
+import { listMessages } from "./sms-list.ts";
 import { SmsLog, type RecordedSms } from "./sms-log.ts";
 import { messageResource, newSid, TWILIO_API_VERSION, twilioError, type TwilioErrorBody } from "./twilio-format.ts";
 
@@ -145,6 +146,11 @@ export async function startSmsGateway(options: SmsGatewayOptions): Promise<FakeS
     });
     res.status(201).json(messageResource(message));
     delivery.start(message);
+  });
+
+  api.get("/Accounts/:accountSid/Messages.json", (req, res) => {
+    const { matches, page } = listMessages(log.list(), String(req.params.accountSid), req.query);
+    res.json({ messages: matches.map(messageResource), ...page });
   });
 
   api.get("/Accounts/:accountSid/Messages/:messageSid.json", (req, res) => {

@@ -31,14 +31,17 @@ export interface RecordedSms {
 /** In-memory list, oldest first; the fake is one process, so nothing more is needed. */
 export class SmsLog {
   private readonly messages: RecordedSms[] = [];
+  /** Every status step looks its message up; a linear search made a 20,000-message burst quadratic. */
+  private readonly bySid = new Map<string, RecordedSms>();
 
   add(message: RecordedSms): RecordedSms {
     this.messages.push(message);
+    this.bySid.set(message.sid, message);
     return message;
   }
 
   get(sid: string): RecordedSms | undefined {
-    return this.messages.find((m) => m.sid === sid);
+    return this.bySid.get(sid);
   }
 
   /** Copies, so callers cannot change what the gateway remembers. */
@@ -57,5 +60,6 @@ export class SmsLog {
 
   clear(): void {
     this.messages.length = 0;
+    this.bySid.clear();
   }
 }

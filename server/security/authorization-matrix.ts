@@ -19,6 +19,8 @@ const anyoneSignedIn: MatrixRow = { signedOut: 401, customerOwn: "ok", customerO
 const ownRecordOrStaff: MatrixRow = { signedOut: 401, customerOwn: "ok", customerOther: 404, technician: "ok", manager: "ok", deactivated: 401 };
 /** Reached by a secret token in the URL, never by a session: a made-up token is not found for anyone. */
 const feedByToken: MatrixRow = { signedOut: 404, customerOwn: 404, customerOther: 404, technician: 404, manager: 404, deactivated: 404 };
+/** Webhooks prove themselves with the provider's signature; no session helps, none is needed. */
+const signedWebhook: MatrixRow = { signedOut: 403, customerOwn: 403, customerOther: 403, technician: 403, manager: 403, deactivated: 403 };
 /** Only the customer who owns the record. */
 const ownRecordOnly: MatrixRow = { signedOut: 401, customerOwn: "ok", customerOther: 404, technician: 403, manager: 403, deactivated: 401 };
 
@@ -44,6 +46,17 @@ export const authorizationMatrix: Record<string, MatrixRow> = {
   "PATCH /api/visits/:id": staffOnly,
   "GET /api/audit": managerOnly,
   "POST /api/programs": managerOnly,
+  "GET /api/reminders/failed": staffOnly,
+  "GET /api/my/preferences": customerOnly,
+  "PUT /api/my/preferences": customerOnly,
+  "POST /api/my/contact": customerOnly,
+  // Links from messages: the token in the link is the proof (400 without one).
+  "GET /api/my/contact/confirm": publicRoute,
+  "POST /api/my/contact/confirm": publicRoute,
+  "GET /api/unsubscribe/email": publicRoute,
+  "POST /api/unsubscribe/email": publicRoute,
+  "POST /api/webhooks/sms/inbound": signedWebhook,
+  "POST /api/webhooks/sms/status": signedWebhook,
   "GET /api/questions/open": staffOnly,
   "GET /api/plans/:planId/thread": ownRecordOrStaff,
   "POST /api/plans/:planId/questions": ownRecordOnly,
@@ -76,4 +89,4 @@ export const authorizationMatrix: Record<string, MatrixRow> = {
   "GET /api/visit-imports/:batchId": managerOnly,
 };
 
-export const matrixKinds = { feedByToken, publicRoute, staffOnly, managerOnly, customerOnly, anyoneSignedIn, ownRecordOrStaff, ownRecordOnly };
+export const matrixKinds = { signedWebhook, feedByToken, publicRoute, staffOnly, managerOnly, customerOnly, anyoneSignedIn, ownRecordOrStaff, ownRecordOnly };
