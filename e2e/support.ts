@@ -28,7 +28,9 @@ export async function signInHomeownerThroughOutbox(browser: Browser, page: Page,
   const staffPage = await staff.newPage();
   await signInStaff(staffPage, "dana@cobblefield.example");
   await staffPage.goto("/staff/outbox");
-  const message = staffPage.getByTestId("outbox-message").filter({ hasText: contact }).first();
+  // The newest message to this contact that carries a sign-in link (reminders may arrive too).
+  const signInLink = staffPage.getByRole("link", { name: /\/portal\/sign-in\/verify/ });
+  const message = staffPage.getByTestId("outbox-message").filter({ hasText: contact }).filter({ has: signInLink }).first();
   const link = message.getByRole("link", { name: /\/portal\/sign-in\/verify/ }).first();
   await expect(link).toBeVisible({ timeout: 15_000 });
   const href = await link.getAttribute("href");

@@ -11,4 +11,9 @@ export type LogVisit = z.input<typeof logVisitSchema>;
 
 export const moveVisitSchema = z.object({ date: isoDateSchema });
 
-export const visitLoggedSchema = z.object({ visitId: z.number().int(), planId: z.number().int() });
+export const visitLoggedSchema = z.object({
+  visitId: z.number().int(),
+  planId: z.number().int(),
+  /** After a seeding visit the homeowner is sent a link to the new plan. */
+  invitationSent: z.boolean(),
+});

@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import request from "supertest";
-import { createTestContext, signInCustomer, signInStaff, type TestContext } from "../../test/harness.ts";
+import { createTestContext, signInCustomer, signInStaff, waitForMessage, type TestContext } from "../../test/harness.ts";
 import { localDateAt } from "../../lib/local-date.ts";
 import { addDays } from "#shared/engine/index";
 
@@ -42,8 +42,14 @@ async function stepRows(planId: number) {
 
 describe("logging a visit creates its care plan", () => {
   it("stores the visit, the plan and every step together, and the homeowner can read it", async () => {
+    await ctx.fakes.clearOutbox();
     const res = await technician.post("/api/visits").send(visitBody()).expect(201);
     const { visitId, planId } = res.body;
+    // A seeding visit invites the homeowner to the new plan with a one-time link.
+    expect(res.body.invitationSent).toBe(true);
+    const invitation = await waitForMessage(ctx.fakes, "ruth.okonkwo@mail.example");
+    expect(invitation.subject).toBe("Your lawn care plan from Cobblefield Turf Care");
+    expect(invitation.links[0]).toContain("/portal/sign-in/verify?token=");
     expect(visitId).toBeGreaterThan(0);
     const plan = await ctx.db("care_plans").where({ id: planId }).first();
     expect(plan.visit_id).toBe(visitId);

@@ -7,6 +7,8 @@ import { findInCompany } from "../properties/repo.ts";
 import { createPlanForVisit, regeneratePlan, type PlanChangeHook } from "../plans/service.ts";
 import { planIdOfVisit } from "../plans/plans-repo.ts";
 import { insertVisit, loadVisitWithProperty, moveVisit } from "./repo.ts";
+import { inviteToPlan } from "../auth/invitation.ts";
+import { SEEDING_SERVICES } from "#shared/engine/index";
 
 const staff = ["technician", "manager"] as const;
 
@@ -35,7 +37,15 @@ export function visitRoutes(deps: AppDeps, onChange?: PlanChangeHook): RouteSpec
           const { planId } = await createPlanForVisit(trx, visitId, onChange);
           return { visitId, planId };
         });
-        res.status(201).json(created);
+        // The visit is saved either way; a message that can't go out now is reported, not fatal.
+        const seeding = services.some((s) => (SEEDING_SERVICES as readonly string[]).includes(s));
+        const invitationSent = seeding
+          ? await inviteToPlan(deps, created.planId).catch((err) => {
+              deps.log(`invitation for plan ${created.planId} could not be sent`, err);
+              return false;
+            })
+          : false;
+        res.status(201).json({ ...created, invitationSent });
       },
     }),
     route({

@@ -5,6 +5,7 @@ import type { ChosenLawn } from "../lib/chosen-lawn.ts";
 export interface SavedVisit {
   visitId: number;
   planId: number;
+  invitationSent: boolean;
   lawn: ChosenLawn;
   date: string;
 }
@@ -17,6 +18,11 @@ export function VisitSaved({ saved, onLogAnother }: { saved: SavedVisit; onLogAn
         <Notice tone="success" title="The visit and its care plan are saved">
           Care plan {saved.planId} now follows this visit: watering, mowing and feeding dates for the homeowner.
         </Notice>
+        {saved.invitationSent ? (
+          <Notice tone="info">{saved.lawn.customerName} has been sent a link to the new plan.</Notice>
+        ) : (
+          <Notice tone="info">No invitation was sent (not a seeding visit, or no contact on file). The homeowner can still sign in to see the plan.</Notice>
+        )}
         <div className="flex flex-wrap gap-2">
           <Link to={`/customers/${saved.lawn.customerId}#plan-${saved.planId}`} className={buttonClasses("primary")} data-testid="saved-plan-link">
             See the care plan
