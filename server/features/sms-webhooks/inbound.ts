@@ -22,10 +22,13 @@ async function findTexter(db: Db, phone: string): Promise<Texter | undefined> {
   return row && { customerId: row.customer_id, userId: row.user_id, senderName: row.sms_sender_name, companyName: row.name };
 }
 
-/** A number we don't know still gets an answer to STOP and HELP, in the name of the only sender it can have heard from. */
+/**
+ * A number we don't know still gets an answer to STOP and HELP, in the name of the company
+ * this deployment (and so its SMS number) serves: the oldest, as GET /api/company has it.
+ */
 async function fallbackSender(db: Db): Promise<{ senderName: string; companyName: string }> {
-  const companies = await db("companies").orderBy("id").limit(2).select<{ sms_sender_name: string; name: string }[]>("sms_sender_name", "name");
-  return companies.length === 1 ? { senderName: companies[0]!.sms_sender_name, companyName: companies[0]!.name } : { senderName: "Sproutline", companyName: "your lawn care company" };
+  const company = await db("companies").orderBy("id").first<{ sms_sender_name: string; name: string } | undefined>("sms_sender_name", "name");
+  return company ? { senderName: company.sms_sender_name, companyName: company.name } : { senderName: "Sproutline", companyName: "your lawn care company" };
 }
 
 /** Marks today's pending watering steps done on every active plan of the customer; returns how many. */
