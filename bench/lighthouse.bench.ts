@@ -43,6 +43,7 @@ async function score(url: string, cookie?: string) {
     ...(cookie ? { extraHeaders: { Cookie: cookie } } : {}),
   });
   const lhr = result!.lhr;
+  if (lhr.runtimeError) throw new Error(`Lighthouse could not score ${url}: ${lhr.runtimeError.code} ${lhr.runtimeError.message}`);
   const metric = (id: string) => Math.round(Number(lhr.audits[id]?.numericValue ?? NaN));
   return {
     performance: Math.round((lhr.categories.performance?.score ?? 0) * 100),

@@ -14,7 +14,8 @@ const sessionDays = 30;
  */
 export function createSessionMiddleware(config: Config): { middleware: RequestHandler; close: () => Promise<void> } {
   const PgStore = connectPgSimple(session);
-  const pool = new pg.Pool({ connectionString: config.DATABASE_URL, max: 5 });
+  // Every signed-in request reads its session first, so this pool must not be the narrow part.
+  const pool = new pg.Pool({ connectionString: config.DATABASE_URL, max: 15 });
   // A restarting database must not crash the process through an idle client's error.
   pool.on("error", () => {});
   // No "touch": extending every session on every request would turn each read into a write.

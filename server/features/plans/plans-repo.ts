@@ -79,6 +79,17 @@ export async function plansOfCustomer(db: Db, customerId: number): Promise<PlanH
   return (rows as HeaderRow[]).map(toHeader);
 }
 
+/** The plan header with what Today shows beside the steps: hold-offs, warnings and caution texts. */
+export type TodayPlanRow = HeaderRow & Pick<PlanRow, "company_id" | "customer_id" | "hold_offs" | "warnings"> & { cautions: Plan["cautions"] };
+
+export async function loadTodayPlanRow(db: Db, planId: number): Promise<TodayPlanRow | undefined> {
+  // Only the cautions out of the figures: the whole figures document is large and Today is the hottest request.
+  return (await headerQuery(db)
+    .select("customers.company_id", "customers.id as customer_id", "care_plans.hold_offs", "care_plans.warnings", db.raw("care_plans.figures -> 'cautions' as cautions"))
+    .where("care_plans.id", planId)
+    .first()) as TodayPlanRow | undefined;
+}
+
 export async function loadPlanRow(db: Db, planId: number): Promise<PlanRow | undefined> {
   return (await headerQuery(db)
     .select("customers.company_id", "customers.id as customer_id", "care_plans.hold_offs", "care_plans.warnings", "care_plans.figures")

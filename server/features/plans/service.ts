@@ -93,7 +93,7 @@ const milestoneKinds = ["mow", "check_in_photo", "feed"];
  * and reads only today's and the upcoming milestone steps.
  */
 export async function todayView(db: Db, user: SessionUser, planId: number, now = new Date()): Promise<TodayResponse> {
-  const row = await plans.loadPlanRow(db, planId);
+  const row = await plans.loadTodayPlanRow(db, planId);
   if (!row || row.company_id !== user.companyId || (user.role === "customer" && row.customer_id !== user.customerId)) {
     throw notFound("That care plan");
   }
@@ -107,6 +107,6 @@ export async function todayView(db: Db, user: SessionUser, planId: number, now =
     activeHoldOffs: row.hold_offs.filter((h) => h.start <= today && today <= h.end).map((h) => ({ ...h, cautions: [...h.cautions] })),
     nextMilestone: upcoming ? { kind: upcoming.kind, date: upcoming.date, title: upcoming.title } : null,
     warnings: [...row.warnings],
-    cautions: row.figures.cautions.map((c) => ({ ...c })),
+    cautions: row.cautions.map((c) => ({ ...c })),
   };
 }
