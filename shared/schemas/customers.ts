@@ -2,6 +2,7 @@ import { z } from "zod";
 import { planHeaderSchema } from "./plans.ts";
 import { propertySummarySchema } from "./properties.ts";
 import { followUpSchema } from "./follow-ups.ts";
+import { applicationRecordSchema, visitConditionsSchema } from "./visits.ts";
 
 /** Search by name, street, phone (any format: its digits are compared), e-mail or customer number. */
 export const customerSearchQuerySchema = z.object({
@@ -30,14 +31,50 @@ export const customerVisitSchema = z.object({
   technicianName: z.string().nullable(),
   notes: z.string().nullable(),
   planId: z.number().int().nullable(),
+  conditions: visitConditionsSchema.nullable(),
+  applicationRecord: applicationRecordSchema.nullable(),
 });
+export type CustomerVisit = z.infer<typeof customerVisitSchema>;
 
-/** The customer page. Conversations and reminders are added by their own features. */
+/** The conversation thread of one care plan, in numbers. */
+export const customerConversationSchema = z.object({
+  planId: z.number().int(),
+  messageCount: z.number().int(),
+  openQuestions: z.number().int(),
+  /** ISO date-time; null for a thread with no message yet. */
+  lastMessageAt: z.string().nullable(),
+});
+export type CustomerConversation = z.infer<typeof customerConversationSchema>;
+
+export const REMINDER_STATES = ["scheduled", "sending", "sent", "delivered", "failed", "cancelled", "skipped_opted_out"] as const;
+
+/** One reminder from the ledger with how its delivery went. */
+export const customerReminderSchema = z.object({
+  id: z.number().int(),
+  planId: z.number().int(),
+  kind: z.enum(["daily_summary", "watering_nudge"]),
+  channel: z.enum(["sms", "email"]),
+  localDate: z.string(),
+  localTime: z.string(),
+  dueAt: z.string(),
+  state: z.enum(REMINDER_STATES),
+  attempts: z.number().int(),
+  lastError: z.string().nullable(),
+  sentAt: z.string().nullable(),
+});
+export type CustomerReminder = z.infer<typeof customerReminderSchema>;
+
+/** How many reminders the customer page lists: the most recent by due time. */
+export const CUSTOMER_REMINDERS_LIMIT = 50;
+
+/** The customer page. */
 export const customerDetailSchema = z.object({
   customer: customerSummarySchema.omit({ properties: true, activePlans: true }).extend({ createdAt: z.string() }),
   properties: z.array(propertySummarySchema),
   plans: z.array(planHeaderSchema),
   visits: z.array(customerVisitSchema),
   followUps: z.array(followUpSchema),
+  conversations: z.array(customerConversationSchema),
+  reminders: z.array(customerReminderSchema),
 });
 export type CustomerDetail = z.infer<typeof customerDetailSchema>;

@@ -1,10 +1,74 @@
 import { z } from "zod";
 import { isoDateSchema, visitSchema } from "../engine/index.ts";
 
-/** Logging a visit: the engine's visit fields plus which lawn and optional notes. */
+export const WIND_DIRECTIONS = ["calm", "N", "NE", "E", "SE", "S", "SW", "W", "NW", "variable"] as const;
+
+const temperatureFSchema = z
+  .number({ error: "Enter the temperature in °F" })
+  .min(-40, "Must be at least −40 °F")
+  .max(130, "Must be at most 130 °F");
+const windMphSchema = z
+  .number({ error: "Enter the wind speed in mph" })
+  .min(0, "Can't be below 0 mph")
+  .max(100, "Must be at most 100 mph");
+const windDirectionSchema = z.enum(WIND_DIRECTIONS, { error: "Pick a wind direction from the list" });
+
+/** A required line of text with a message for when it is missing, and an upper bound. */
+const requiredText = (missing: string, max: number) =>
+  z.string({ error: missing }).trim().min(1, missing).max(max, `Keep it under ${max} characters`);
+const optionalText = (max: number) =>
+  z.string().trim().max(max, `Keep it under ${max} characters`).optional().transform((s) => (s ? s : undefined));
+
+/** The weather at the time of the visit. */
+export const visitConditionsSchema = z.object({
+  temperatureF: temperatureFSchema.optional(),
+  windMph: windMphSchema.optional(),
+  windDirection: windDirectionSchema.optional(),
+});
+export type VisitConditions = z.infer<typeof visitConditionsSchema>;
+
+/**
+ * What a regulator asks to be recorded when a pesticide or other regulated product is applied.
+ * The label and the state's rules govern; this is the record, not advice.
+ */
+export const applicationRecordSchema = z
+  .object({
+    product: requiredText("Name the product applied", 200),
+    epaRegistrationNumber: optionalText(40),
+    stateRegistrationNumber: optionalText(40),
+    rate: z.object(
+      {
+        amount: z.number({ error: "Give the rate applied as a number" }).gt(0, "Must be more than 0").max(10_000, "Must be at most 10,000"),
+        unit: requiredText("Give the unit of the rate", 40),
+      },
+      { error: "Give the rate applied" },
+    ),
+    /** In ft², like the visit's area. */
+    areaTreated: z
+      .number({ error: "Give the area treated in ft²" })
+      .gt(0, "Must be more than 0")
+      .max(5_000_000, "Must be at most 5,000,000 ft²"),
+    targetPest: requiredText("Name the target pest or weed", 200),
+    applicatorName: requiredText("Name the applicator", 120),
+    applicatorLicenceNumber: requiredText("Give the applicator's licence number", 60),
+    windMph: windMphSchema.optional(),
+    windDirection: windDirectionSchema.optional(),
+    temperatureF: temperatureFSchema.optional(),
+    appliedAt: z.iso.datetime({ offset: true, error: "Give the time as an ISO date-time" }).optional(),
+  })
+  .superRefine((record, ctx) => {
+    if (!record.epaRegistrationNumber && !record.stateRegistrationNumber) {
+      ctx.addIssue({ code: "custom", path: ["epaRegistrationNumber"], message: "Give the EPA or the state registration number" });
+    }
+  });
+export type ApplicationRecord = z.infer<typeof applicationRecordSchema>;
+
+/** Logging a visit: the engine's visit fields plus which lawn, the conditions, a regulated-application record and notes. */
 export const logVisitSchema = z.object({
   propertyId: z.number().int().positive(),
   visit: visitSchema,
+  conditions: visitConditionsSchema.optional(),
+  applicationRecord: applicationRecordSchema.optional(),
   notes: z.string().trim().max(4000).optional(),
 });
 export type LogVisit = z.input<typeof logVisitSchema>;

@@ -43,6 +43,18 @@ describe("customer page", () => {
     const property = await ctx.db("properties").where({ customer_id: ruthId }).first<{ id: number }>("id");
     const plan = await ctx.db("care_plans").where({ property_id: property!.id }).first<{ id: number }>("id");
     await marco.post("/api/follow-ups").send({ propertyId: property!.id, planId: plan!.id, reason: "under_watering", isCallback: true }).expect(201);
+    // A question on the plan's thread and a reminder that could not be delivered.
+    await ctx.db("conversations").insert({ plan_id: plan!.id }).onConflict("plan_id").ignore();
+    const conversation = await ctx.db("conversations").where({ plan_id: plan!.id }).first<{ id: number }>("id");
+    const asked = new Date(Date.now() + 60_000);
+    await ctx.db("messages").insert({ conversation_id: conversation!.id, kind: "question", text: "Is the yellow normal? (customers test)", created_at: asked });
+    const dueAt = new Date("2099-06-01T12:00:00Z");
+    const [reminder] = await ctx.db("reminders")
+      .insert({
+        customer_id: ruthId, plan_id: plan!.id, kind: "daily_summary", local_date: "2099-06-01", local_time: "08:00", time_zone: "America/New_York",
+        channel: "sms", due_at: dueAt, next_attempt_at: dueAt, state: "failed", attempts: 3, last_error: "Unreachable handset (test)",
+      })
+      .returning<{ id: string }[]>("id");
 
     const res = await marco.get(`/api/customers/${ruthId}`).expect(200);
     expect(res.body.customer).toMatchObject({ id: ruthId, firstName: "Ruth", externalRef: "C-1001" });
@@ -53,6 +65,15 @@ describe("customer page", () => {
     expect(progress.done).toBeLessThanOrEqual(progress.total);
     expect(res.body.visits[0]).toMatchObject({ services: expect.any(Array), planId: expect.any(Number) });
     expect(res.body.followUps.some((f: { reason: string; isCallback: boolean }) => f.reason === "under_watering" && f.isCallback)).toBe(true);
+    const thread = res.body.conversations.find((c: { planId: number }) => c.planId === plan!.id);
+    expect(thread).toMatchObject({ planId: plan!.id, messageCount: expect.any(Number), lastMessageAt: asked.toISOString() });
+    expect(thread.openQuestions).toBeGreaterThanOrEqual(1);
+    expect(thread.messageCount).toBeGreaterThanOrEqual(thread.openQuestions);
+    expect(res.body.reminders.length).toBeLessThanOrEqual(50);
+    expect(res.body.reminders[0]).toEqual({
+      id: Number(reminder!.id), planId: plan!.id, kind: "daily_summary", channel: "sms", localDate: "2099-06-01", localTime: "08:00",
+      dueAt: dueAt.toISOString(), state: "failed", attempts: 3, lastError: "Unreachable handset (test)", sentAt: null,
+    });
 
     // Audit entries are written after the response; give it a moment.
     await new Promise((r) => setTimeout(r, 100));

@@ -1,4 +1,7 @@
-import type { CustomerSummary } from "#shared/schemas/customers";
+import {
+  CUSTOMER_REMINDERS_LIMIT, type CustomerConversation, type CustomerReminder, type CustomerSummary, type CustomerVisit,
+} from "#shared/schemas/customers";
+import type { ApplicationRecord, VisitConditions } from "#shared/schemas/visits";
 import type { Db } from "../../db.ts";
 
 type CustomerRow = {
@@ -57,15 +60,61 @@ export async function findCustomer(db: Db, companyId: number, id: number) {
   return row ? { ...toCustomer(row), createdAt: row.created_at.toISOString() } : undefined;
 }
 
-export async function visitsOfCustomer(db: Db, customerId: number) {
+export async function visitsOfCustomer(db: Db, customerId: number): Promise<CustomerVisit[]> {
   const rows = await db("service_visits as v")
     .join("properties as p", "p.id", "v.property_id")
     .leftJoin("users as t", "t.id", "v.technician_id")
     .leftJoin("care_plans as cp", "cp.visit_id", "v.id")
     .where("p.customer_id", customerId)
     .orderBy([{ column: "v.visit_date", order: "desc" }, { column: "v.id", order: "desc" }])
-    .select<{ id: number; property_id: number; visit_date: string; services: string[]; technician_name: string | null; notes: string | null; plan_id: number | null }[]>(
+    .select<{
+      id: number; property_id: number; visit_date: string; services: string[]; technician_name: string | null; notes: string | null; plan_id: number | null;
+      conditions: VisitConditions | null; application_record: ApplicationRecord | null;
+    }[]>(
       "v.id", "v.property_id", "v.visit_date", "v.services", "t.name as technician_name", "v.notes", "cp.id as plan_id",
+      "v.conditions", "v.application_record",
     );
-  return rows.map((r) => ({ id: r.id, propertyId: r.property_id, visitDate: r.visit_date, services: r.services, technicianName: r.technician_name, notes: r.notes, planId: r.plan_id }));
+  return rows.map((r) => ({
+    id: r.id, propertyId: r.property_id, visitDate: r.visit_date, services: r.services, technicianName: r.technician_name, notes: r.notes, planId: r.plan_id,
+    conditions: r.conditions, applicationRecord: r.application_record,
+  }));
+}
+
+/** Each of the customer's plan threads: how many messages, how many questions still open, the latest. */
+export async function conversationsOfCustomer(db: Db, customerId: number): Promise<CustomerConversation[]> {
+  const rows = await db("conversations as c")
+    .join("care_plans as cp", "cp.id", "c.plan_id")
+    .join("properties as p", "p.id", "cp.property_id")
+    .leftJoin("messages as m", "m.conversation_id", "c.id")
+    .where("p.customer_id", customerId)
+    .groupBy("c.id", "c.plan_id")
+    .orderByRaw("max(m.created_at) desc nulls last, c.plan_id desc")
+    .select<{ plan_id: number; message_count: string; open_questions: string; last_message_at: Date | null }[]>(
+      "c.plan_id",
+      db.raw("count(m.id) as message_count"),
+      db.raw("count(m.id) filter (where m.kind = 'question' and m.resolved_at is null) as open_questions"),
+      db.raw("max(m.created_at) as last_message_at"),
+    );
+  return rows.map((r) => ({
+    planId: r.plan_id,
+    messageCount: Number(r.message_count),
+    openQuestions: Number(r.open_questions),
+    lastMessageAt: r.last_message_at ? r.last_message_at.toISOString() : null,
+  }));
+}
+
+/** The customer's most recent reminders (by due time) with their delivery state. */
+export async function remindersOfCustomer(db: Db, customerId: number): Promise<CustomerReminder[]> {
+  const rows = await db("reminders")
+    .where({ customer_id: customerId })
+    .orderBy([{ column: "due_at", order: "desc" }, { column: "id", order: "desc" }])
+    .limit(CUSTOMER_REMINDERS_LIMIT)
+    .select<{
+      id: string | number; plan_id: number; kind: CustomerReminder["kind"]; channel: CustomerReminder["channel"]; local_date: string; local_time: string;
+      due_at: Date; state: CustomerReminder["state"]; attempts: number; last_error: string | null; sent_at: Date | null;
+    }[]>("id", "plan_id", "kind", "channel", "local_date", "local_time", "due_at", "state", "attempts", "last_error", "sent_at");
+  return rows.map((r) => ({
+    id: Number(r.id), planId: r.plan_id, kind: r.kind, channel: r.channel, localDate: r.local_date, localTime: r.local_time,
+    dueAt: r.due_at.toISOString(), state: r.state, attempts: r.attempts, lastError: r.last_error, sentAt: r.sent_at ? r.sent_at.toISOString() : null,
+  }));
 }

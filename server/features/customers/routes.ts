@@ -6,7 +6,7 @@ import { route, type RouteSpec } from "../../http/route.ts";
 import { followUpsOfCustomer } from "../follow-ups/repo.ts";
 import { plansOfCustomer } from "../plans/plans-repo.ts";
 import { listForCustomer } from "../properties/repo.ts";
-import { findCustomer, searchCustomers, visitsOfCustomer } from "./repo.ts";
+import { conversationsOfCustomer, findCustomer, remindersOfCustomer, searchCustomers, visitsOfCustomer } from "./repo.ts";
 
 const staff = ["technician", "manager"] as const;
 
@@ -28,13 +28,15 @@ export function customerRoutes(db: Db): RouteSpec[] {
       handler: async ({ user, params }): Promise<CustomerDetail> => {
         const customer = await findCustomer(db, user.companyId, params.id);
         if (!customer) throw notFound("That customer");
-        const [properties, plans, visits, followUps] = await Promise.all([
+        const [properties, plans, visits, followUps, conversations, reminders] = await Promise.all([
           listForCustomer(db, user.companyId, customer.id),
           plansOfCustomer(db, customer.id),
           visitsOfCustomer(db, customer.id),
           followUpsOfCustomer(db, user.companyId, customer.id),
+          conversationsOfCustomer(db, customer.id),
+          remindersOfCustomer(db, customer.id),
         ]);
-        return { customer, properties, plans, visits, followUps };
+        return { customer, properties, plans, visits, followUps, conversations, reminders };
       },
     }),
   ];

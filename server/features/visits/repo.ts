@@ -1,3 +1,4 @@
+import type { ApplicationRecord, VisitConditions } from "#shared/schemas/visits";
 import type { Db } from "../../db.ts";
 
 export type VisitDetails = {
@@ -20,7 +21,12 @@ export type VisitWithProperty = {
 
 export async function insertVisit(
   trx: Db,
-  row: { propertyId: number; technicianId: number | null; date: string; services: readonly string[]; details: VisitDetails; notes?: string | null; importKey?: string | null },
+  row: {
+    propertyId: number; technicianId: number | null; date: string; services: readonly string[]; details: VisitDetails;
+    notes?: string | null; importKey?: string | null;
+    /** Optional: imports and seeds have none. */
+    conditions?: VisitConditions | null; applicationRecord?: ApplicationRecord | null;
+  },
 ): Promise<number> {
   const [created] = await trx("service_visits")
     .insert({
@@ -31,6 +37,8 @@ export async function insertVisit(
       details: JSON.stringify(row.details),
       notes: row.notes ?? null,
       import_key: row.importKey ?? null,
+      conditions: row.conditions && Object.keys(row.conditions).length > 0 ? JSON.stringify(row.conditions) : null,
+      application_record: row.applicationRecord ? JSON.stringify(row.applicationRecord) : null,
     })
     .returning<{ id: number }[]>("id");
   return created!.id;

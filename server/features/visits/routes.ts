@@ -33,6 +33,8 @@ export function visitRoutes(deps: AppDeps, onChange?: PlanChangeHook): RouteSpec
             services,
             details,
             notes: body.notes,
+            conditions: body.conditions,
+            applicationRecord: body.applicationRecord,
           });
           const { planId } = await createPlanForVisit(trx, visitId, onChange);
           return { visitId, planId };

@@ -1,10 +1,13 @@
 import { useEffect } from "react";
 import { Link, useLocation, useParams } from "react-router-dom";
 import { ErrorState, LoadingState, NotFoundPage, Page, isApiRequestError } from "#shared/ui/index";
+import { CUSTOMER_REMINDERS_LIMIT } from "#shared/schemas/customers";
 import { useCustomer } from "./api/get-customer.ts";
+import { ConversationList } from "./components/conversation-list.tsx";
 import { FollowUpList } from "./components/follow-up-list.tsx";
 import { PlanCard } from "./components/plan-card.tsx";
 import { PropertyList } from "./components/property-list.tsx";
+import { ReminderList } from "./components/reminder-list.tsx";
 import { Section } from "./components/section.tsx";
 import { VisitList } from "./components/visit-list.tsx";
 
@@ -41,9 +44,10 @@ function CustomerPage({ id }: { id: number }) {
     );
   }
 
-  const { customer: c, properties, plans, visits, followUps } = customer.data;
+  const { customer: c, properties, plans, visits, followUps, conversations, reminders } = customer.data;
   const name = `${c.firstName} ${c.lastName}`;
   const streetOf = (propertyId: number) => properties.find((p) => p.id === propertyId)?.street ?? "another lawn";
+  const streetOfPlan = (planId: number) => plans.find((p) => p.id === planId)?.street ?? "another lawn";
   return (
     <Page
       title={name}
@@ -66,11 +70,18 @@ function CustomerPage({ id }: { id: number }) {
             ))}
           </div>
         </Section>
+        <Section title="Conversations" count={conversations.length} empty="No questions or messages yet.">
+          <ConversationList conversations={conversations} streetOfPlan={streetOfPlan} />
+        </Section>
         <Section title="Visits" count={visits.length} empty="No visits logged yet.">
           <VisitList visits={visits} streetOf={streetOf} />
         </Section>
         <Section title="Follow-up visits" count={followUps.length} empty="No follow-up visits.">
           <FollowUpList followUps={followUps} />
+        </Section>
+        <Section title="Reminders" count={reminders.length} empty="No reminders scheduled or sent yet.">
+          <p className="text-base text-ink-soft">The most recent {CUSTOMER_REMINDERS_LIMIT} at most, latest first.</p>
+          <ReminderList reminders={reminders} />
         </Section>
       </div>
     </Page>

@@ -14,6 +14,7 @@ import { SeedFields } from "./components/seed-fields.tsx";
 import { VisitBasics } from "./components/visit-basics.tsx";
 import { VisitSaved, type SavedVisit } from "./components/visit-saved.tsx";
 import type { ChosenLawn } from "./lib/chosen-lawn.ts";
+import { toFormFields } from "./lib/application-record.ts";
 import { clearDraft, loadDraft, saveDraft } from "./lib/draft.ts";
 import { VisitErrorsContext } from "./lib/field-errors.ts";
 import { defaultVisitForm, fieldId, type VisitFormValues } from "./lib/form-values.ts";
@@ -88,7 +89,7 @@ export function VisitLogRoute() {
       },
       // Everything typed stays in the form (and on the device), whatever went wrong.
       onError: (error) => {
-        const fields = isApiRequestError(error) ? error.fields : {};
+        const fields = isApiRequestError(error) ? toFormFields(error.fields) : {};
         setServerFields(fields);
         setFormMessage(isApiRequestError(error) ? error.message : "The visit wasn't saved. Please try again.");
         focusFirst(Object.keys(fields));

@@ -2,7 +2,7 @@ import { queryOptions, useQuery } from "@tanstack/react-query";
 import { customerDetailSchema, type CustomerDetail } from "#shared/schemas/customers";
 import { apiFetch } from "#shared/ui/index";
 
-/** The customer page: lawns, care plans with progress, visits and follow-up visits. */
+/** The customer page: lawns, care plans with progress, conversations, visits, follow-up visits and reminders. */
 export async function getCustomer(id: number, signal?: AbortSignal): Promise<CustomerDetail> {
   return apiFetch(`/api/customers/${id}`, { schema: customerDetailSchema, signal });
 }

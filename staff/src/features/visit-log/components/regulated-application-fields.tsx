@@ -24,9 +24,10 @@ export function RegulatedApplicationFields() {
             <VisitTextField path="application.epaRegistrationNo" label="EPA registration number" hint="Or the state number below." />
             <VisitTextField path="application.stateRegistrationNo" label="State registration number" />
           </div>
-          <div className="grid gap-4 sm:grid-cols-2">
-            <VisitTextField path="application.rate" label="Rate applied" hint="With its unit, e.g. 1.5 fl oz per 1,000 ft²." />
-            <VisitTextField path="application.areaTreated" label="Area treated" hint="With its unit, e.g. 2,000 ft² (front beds)." />
+          <div className="grid gap-4 sm:grid-cols-3">
+            <VisitTextField path="application.rate" label="Rate applied" hint="The amount, e.g. 1.5." numeric />
+            <VisitTextField path="application.rateUnit" label="Unit of the rate" hint="As on the label, e.g. fl oz per 1,000 ft²." />
+            <VisitTextField path="application.areaTreated" label="Area the product went on (ft²)" hint="E.g. 2,000 for the front beds." numeric />
           </div>
           <VisitTextField path="application.target" label="Target pest or weed" />
           <div className="grid gap-4 sm:grid-cols-2">

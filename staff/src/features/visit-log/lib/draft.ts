@@ -1,5 +1,5 @@
 import type { ChosenLawn } from "./chosen-lawn.ts";
-import type { VisitFormValues } from "./form-values.ts";
+import { emptyApplication, type VisitFormValues } from "./form-values.ts";
 
 /*
  * A visit half-logged on a phone survives a closed tab, a lock screen or a dead signal:
@@ -18,7 +18,10 @@ export function loadDraft(): VisitDraft | null {
     const raw = localStorage.getItem(KEY);
     if (!raw) return null;
     const draft = JSON.parse(raw) as VisitDraft;
-    return draft && typeof draft === "object" && draft.values?.visit ? draft : null;
+    if (!draft || typeof draft !== "object" || !draft.values?.visit) return null;
+    // A draft kept by an older version of the form may lack fields added since.
+    draft.values.application = { ...emptyApplication(), ...draft.values.application };
+    return draft;
   } catch {
     return null;
   }

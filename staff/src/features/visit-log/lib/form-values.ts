@@ -1,10 +1,13 @@
 import type { Service, Species } from "#shared/engine/index";
 import { localToday } from "#shared/ui/index";
+import { WIND_DIRECTIONS } from "#shared/schemas/visits";
 
 /*
  * The form keeps what was typed, as text; it is turned into the API's numbers on save
  * (lib/to-log-visit.ts). Paths mirror the API body ("visit.seedMix.0.percent"), so the
- * server's field errors land on the right inputs without translation.
+ * server's field errors land on the right inputs without translation — except the regulated
+ * record, typed under "application.*" and sent as "applicationRecord" (lib/application-record.ts
+ * maps the paths back).
  */
 export interface SeedRow {
   species: Species | "";
@@ -22,13 +25,16 @@ export interface ProductRow {
   bagLb: string;
 }
 
-export const WIND_DIRECTIONS = ["calm", "N", "NE", "E", "SE", "S", "SW", "W", "NW", "variable"] as const;
+export { WIND_DIRECTIONS };
 
 export interface ApplicationRecord {
   product: string;
   epaRegistrationNo: string;
   stateRegistrationNo: string;
+  /** The amount, as typed; its unit is `rateUnit`. */
   rate: string;
+  rateUnit: string;
+  /** In ft². */
   areaTreated: string;
   target: string;
   applicatorName: string;
@@ -59,6 +65,7 @@ export const emptyApplication = (): ApplicationRecord => ({
   epaRegistrationNo: "",
   stateRegistrationNo: "",
   rate: "",
+  rateUnit: "fl oz per 1,000 ft²",
   areaTreated: "",
   target: "",
   applicatorName: "",

@@ -1,6 +1,6 @@
 import { SEED_MIX_SUM_TOLERANCE } from "#shared/engine/index";
 import { logVisitSchema, type LogVisit } from "#shared/schemas/visits";
-import { composeNotes } from "./application-notes.ts";
+import { compact, toFormFields, type ApplicationRecordBody, type VisitConditionsBody } from "./application-record.ts";
 import type { VisitFormValues } from "./form-values.ts";
 import { parseNumber } from "./numbers.ts";
 
@@ -59,6 +59,44 @@ export function checkVisitForm(values: VisitFormValues): CheckedVisit {
     rateLbPer1000: number(`visit.products.${i}.rateLbPer1000`, row.rateLbPer1000, true),
     quickReleaseN: row.quickReleaseN,
   }));
+  const regulated = values.regulated;
+  const c = values.conditions;
+  const calm = c.windDirection === "calm";
+  const temperatureF = number("conditions.temperatureF", c.temperatureF, regulated);
+  const typedWind = number("conditions.windMph", c.windMph, regulated && !calm);
+  const windMph = typedWind ?? (calm ? 0 : undefined);
+  const windDirection = (c.windDirection || undefined) as VisitConditionsBody["windDirection"];
+  const conditions = compact<VisitConditionsBody>({ temperatureF, windMph: typedWind, windDirection });
+
+  let applicationRecord: ApplicationRecordBody | undefined;
+  if (regulated) {
+    if (!c.windDirection) fields["conditions.windDirection"] = "Pick the wind direction";
+    const a = values.application;
+    text("application.product", a.product, "Name the product applied");
+    if (!a.epaRegistrationNo.trim() && !a.stateRegistrationNo.trim()) fields["application.epaRegistrationNo"] = "Give the EPA or the state registration number";
+    const rate = number("application.rate", a.rate, true);
+    text("application.rateUnit", a.rateUnit, "Give the unit of the rate");
+    const areaTreated = number("application.areaTreated", a.areaTreated, true);
+    text("application.target", a.target, "Name the target pest or weed");
+    text("application.applicatorName", a.applicatorName, "Name the applicator");
+    text("application.licenceNo", a.licenceNo, "Give the applicator's licence number");
+    applicationRecord = {
+      product: a.product.trim(),
+      epaRegistrationNumber: a.epaRegistrationNo.trim() || undefined,
+      stateRegistrationNumber: a.stateRegistrationNo.trim() || undefined,
+      rate: { amount: rate as number, unit: a.rateUnit.trim() },
+      areaTreated: areaTreated as number,
+      targetPest: a.target.trim(),
+      applicatorName: a.applicatorName.trim(),
+      applicatorLicenceNumber: a.licenceNo.trim(),
+      windMph,
+      windDirection,
+      temperatureF,
+    };
+  }
+  const notes = values.notes.trim() || undefined;
+  if ((notes?.length ?? 0) > NOTES_MAX) fields.notes = `Keep the notes under ${NOTES_MAX.toLocaleString("en-US")} characters`;
+
   const raw = {
     propertyId: Number(values.propertyId) || undefined,
     visit: {
@@ -69,31 +107,22 @@ export function checkVisitForm(values: VisitFormValues): CheckedVisit {
       areaFt2: number("visit.areaFt2", v.areaFt2, true),
       products,
     },
-    notes: composeNotes(values),
+    conditions,
+    applicationRecord,
+    notes,
   };
-
-  const regulated = values.regulated;
-  number("conditions.temperatureF", values.conditions.temperatureF, regulated);
-  number("conditions.windMph", values.conditions.windMph, regulated && values.conditions.windDirection !== "calm");
-  if (regulated) {
-    if (!values.conditions.windDirection) fields["conditions.windDirection"] = "Pick the wind direction";
-    const a = values.application;
-    text("application.product", a.product, "Name the product applied");
-    if (!a.epaRegistrationNo.trim() && !a.stateRegistrationNo.trim()) fields["application.epaRegistrationNo"] = "Give the EPA or the state registration number";
-    text("application.rate", a.rate, "Give the rate applied");
-    text("application.areaTreated", a.areaTreated, "Give the area treated");
-    text("application.target", a.target, "Name the target pest or weed");
-    text("application.applicatorName", a.applicatorName, "Name the applicator");
-    text("application.licenceNo", a.licenceNo, "Give the applicator's licence number");
-  }
-  if ((raw.notes?.length ?? 0) > NOTES_MAX) fields.notes = `With the conditions and application record the notes pass ${NOTES_MAX.toLocaleString("en-US")} characters; shorten them`;
 
   const parsed = logVisitSchema.safeParse(raw);
   if (!parsed.success) {
+    const schemaFields: FormFieldErrors = {};
     for (const issue of parsed.error.issues) {
       const path = issue.path.map(String).join(".");
+      if (path && !(path in schemaFields)) schemaFields[path] = issue.message;
+    }
+    // The schema speaks of "applicationRecord.*"; the form's inputs are "application.*".
+    for (const [path, message] of Object.entries(toFormFields(schemaFields))) {
       // Our own message for the same box is the clearer one (e.g. "Fill this in" over "expected number").
-      if (path && !(path in fields) && !hasChildError(fields, path)) fields[path] = issue.message;
+      if (path && !(path in fields) && !hasChildError(fields, path)) fields[path] = message;
     }
   }
   return Object.keys(fields).length === 0 ? { ok: true, body: raw as LogVisit } : { ok: false, fields };
