@@ -22,7 +22,8 @@ async function recordsOf(ref: string) {
 /**
  * Staff-only records whose path id is not a property, keyed "<path segment>:<param>". Each
  * is harmless to hit as a manager: the saved reply is a throwaway one (DELETE removes it),
- * and the user is the manager themselves (deactivating the only manager answers 409).
+ * the user is the manager themselves (deactivating the only manager answers 409), and the
+ * question is Ruth's own, unassigned by the call.
  */
 const staffRecordIds: Record<string, number> = {};
 async function makeStaffRecords() {
@@ -31,7 +32,10 @@ async function makeStaffRecords() {
   const [followUp] = await ctx.db("follow_up_visits").insert({ property_id: records.own.id, plan_id: records.own.planId, reason: "other", created_by: manager!.id }).returning<{ id: number }[]>("id");
   const [reply] = await ctx.db("saved_replies").insert({ company_id: ruth!.company_id, title: `matrix ${Date.now()}`, body: "Hello {{firstName}}" }).returning<{ id: number }[]>("id");
   const [batch] = await ctx.db("import_batches").insert({ company_id: ruth!.company_id, file_sha256: `matrix ${Date.now()}` }).returning<{ id: number }[]>("id");
-  Object.assign(staffRecordIds, { "follow-ups:id": followUp!.id, "customers:id": ruth!.id, "saved-replies:id": reply!.id, "team:userId": manager!.id, "visit-imports:batchId": batch!.id });
+  // Ruth's open question (asked in photoOf); assigning it to nobody changes nothing.
+  const question = await ctx.db("messages").join("conversations", "conversations.id", "messages.conversation_id")
+    .where({ "conversations.plan_id": records.own.planId, "messages.kind": "question" }).whereNull("messages.resolved_at").orderBy("messages.id").first<{ id: string }>("messages.id");
+  Object.assign(staffRecordIds, { "questions:messageId": Number(question!.id), "follow-ups:id": followUp!.id, "customers:id": ruth!.id, "saved-replies:id": reply!.id, "team:userId": manager!.id, "visit-imports:batchId": batch!.id });
 }
 
 /** Each homeowner asks a question with one photo, so photo routes have a record of each. */
@@ -82,6 +86,7 @@ function fillPath(path: string, caller: Caller): string {
 const sampleBodies: Record<string, unknown> = {
   "PUT /api/plans/:planId/steps/:stepId/state": { state: "done" },
   "POST /api/plans/:planId/observations": { kind: "sprouts_seen", onDay: 5 },
+  "POST /api/questions/:messageId/assign": { userId: null },
 };
 
 function matches(outcome: Outcome, status: number): boolean {

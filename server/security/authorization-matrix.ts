@@ -58,6 +58,7 @@ export const authorizationMatrix: Record<string, MatrixRow> = {
   "POST /api/webhooks/sms/inbound": signedWebhook,
   "POST /api/webhooks/sms/status": signedWebhook,
   "GET /api/questions/open": staffOnly,
+  "POST /api/questions/:messageId/assign": staffOnly,
   "GET /api/plans/:planId/thread": ownRecordOrStaff,
   "POST /api/plans/:planId/questions": ownRecordOnly,
   "POST /api/plans/:planId/answers": staffOnly,

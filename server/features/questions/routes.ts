@@ -11,7 +11,8 @@ import { photoStorageFromConfig, type PhotoStorage } from "../../storage/index.t
 import { findPlanForUser } from "../plans/access.ts";
 import { photoUpload, uploadedBuffers } from "../photos/upload.ts";
 import { answerQuestion, askQuestion, readThread, type QuestionDeps } from "./service.ts";
-import { openQuestions } from "./queue.ts";
+import { assignQuestion, openQuestions } from "./queue.ts";
+import { assignQuestionSchema, questionMessageParamsSchema } from "#shared/schemas/question-queue";
 
 const customerOnly = ["customer"] as const satisfies readonly Role[];
 const staff = ["technician", "manager"] as const satisfies readonly Role[];
@@ -40,6 +41,15 @@ export function questionRoutes(deps: Pick<AppDeps, "config" | "db">, storage: Ph
       path: "/api/questions/open",
       access: staff,
       handler: async ({ user }) => ({ questions: await openQuestions(deps.db, user.companyId) }),
+    }),
+    route({
+      method: "post",
+      path: "/api/questions/:messageId/assign",
+      access: staff,
+      audit: "question.assigned",
+      params: questionMessageParamsSchema,
+      body: assignQuestionSchema,
+      handler: async ({ user, params, body }) => assignQuestion(deps.db, user, params.messageId, body.userId),
     }),
     route({
       method: "get",

@@ -10,6 +10,7 @@ import { PhotoCompare } from "./components/photo-compare.tsx";
 import { PhotoDialog } from "./components/photo-dialog.tsx";
 import { PlanSummary } from "./components/plan-summary.tsx";
 import { QuestionCard } from "./components/question-card.tsx";
+import { AssignQuestion } from "./components/assign-question.tsx";
 import type { PhotoViewing } from "./lib/photo-viewing.ts";
 import { customerPhotos, splitThread } from "./lib/thread-parts.ts";
 
@@ -65,6 +66,7 @@ function QuestionDetail({ planId }: { planId: number }) {
             {parts.focus.map((message) => (
               <QuestionCard key={message.id} message={message} onOpenPhoto={setViewing} />
             ))}
+            {latestQuestion && latestQuestion.id > 0 && <AssignQuestion messageId={latestQuestion.id} />}
             <ConversationMessages title="Since this question" messages={parts.later} onOpenPhoto={setViewing} open />
             <PhotoCompare current={currentPhotos} earlier={earlierPhotos} onOpenPhoto={setViewing} />
             <ConversationMessages title="Earlier conversation" messages={parts.earlier} onOpenPhoto={setViewing} />

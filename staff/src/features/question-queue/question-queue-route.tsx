@@ -1,20 +1,17 @@
 import { useSearchParams } from "react-router-dom";
 import { EmptyState, ErrorState, LoadingState, Page, useSignedInUser } from "#shared/ui/index";
 import { useOpenQuestions } from "./api/get-open-questions.ts";
-import { useQueuePlans } from "./api/get-plan.ts";
 import { QueueCards } from "./components/queue-cards.tsx";
 import { QueueFilters } from "./components/queue-filters.tsx";
 import { QueueTable } from "./components/queue-table.tsx";
 import { QUEUE_FILTER_LABELS, buildRows, countByFilter, countByService, filterRows, isQueueFilter, type QueueFilter } from "./lib/queue-rows.ts";
 import { useNow } from "./lib/use-now.ts";
 
-/** The question queue: homeowners' open questions, oldest waiting at the top. */
+/** The question queue: homeowners' open questions, unanswered ones first, oldest waiting at the top. */
 export function QuestionQueueRoute() {
   const user = useSignedInUser();
   const now = useNow();
   const questions = useOpenQuestions();
-  const planIds = [...new Set((questions.data ?? []).map((q) => q.planId))];
-  const { plans, failed } = useQueuePlans(planIds);
 
   const [params, setParams] = useSearchParams();
   const filterParam = params.get("show");
@@ -31,11 +28,11 @@ export function QuestionQueueRoute() {
       { replace: true },
     );
 
-  const rows = buildRows(questions.data ?? [], plans, failed, now);
+  const rows = buildRows(questions.data ?? []);
   const shown = filterRows(rows, filter, service, user.id);
 
   return (
-    <Page title="Question queue" width="wide" intro="Homeowners' open questions, oldest waiting at the top. Answer them, or book a follow-up visit.">
+    <Page title="Question queue" width="wide" intro="Homeowners' open questions: those waiting for an answer first, oldest at the top. Answer them, or book a follow-up visit.">
       {questions.isPending && <LoadingState label="Loading questions…" />}
       {questions.isError && (
         <ErrorState title="The question queue didn't load" error={questions.error} onRetry={() => void questions.refetch()} retrying={questions.isRefetching} />

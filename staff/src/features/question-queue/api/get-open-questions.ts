@@ -1,26 +1,24 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
-import { z } from "zod";
-import { openQuestionSchema } from "#shared/schemas/question-queue";
+import { openQuestionsResponseSchema, type OpenQuestion } from "#shared/schemas/question-queue";
 import { apiFetch } from "#shared/ui/index";
 
-/*
- * The contract's open question, plus who it is assigned to once the server sends that
- * (the table has the column; the answer doesn't carry it yet). Until then every question
- * reads as unassigned, which is the truth: nobody can assign one yet.
- */
-const queuedQuestionSchema = openQuestionSchema.extend({ assignedToId: z.number().int().nullable().optional() });
-const queueResponseSchema = z.object({ questions: z.array(queuedQuestionSchema) });
-export type QueuedQuestion = z.infer<typeof queuedQuestionSchema>;
+export type QueuedQuestion = OpenQuestion;
 
-/** Every open question of the company, oldest first (the server's order). */
+export const openQuestionsQueryKey = ["questions", "open"] as const;
+
+/**
+ * Every open question of the company: those with no answer after them first, then the
+ * oldest waiting (the server's order). Each carries its plan day, services and assignee,
+ * so the queue needs no other request.
+ */
 export async function getOpenQuestions(signal?: AbortSignal): Promise<QueuedQuestion[]> {
-  const { questions } = await apiFetch("/api/questions/open", { schema: queueResponseSchema, signal });
+  const { questions } = await apiFetch("/api/questions/open", { schema: openQuestionsResponseSchema, signal });
   return questions;
 }
 
 export function openQuestionsQueryOptions() {
   return queryOptions({
-    queryKey: ["questions", "open"] as const,
+    queryKey: openQuestionsQueryKey,
     queryFn: ({ signal }) => getOpenQuestions(signal),
   });
 }

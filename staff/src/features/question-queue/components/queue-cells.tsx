@@ -1,5 +1,6 @@
 import { Link } from "react-router-dom";
-import { waitingTime } from "#shared/ui/index";
+import { errorMessage, useSignedInUser, waitingTime } from "#shared/ui/index";
+import { useAssignQuestion } from "../api/assign-question.ts";
 import type { QueueRow } from "../lib/queue-rows.ts";
 
 const askedFormat = new Intl.DateTimeFormat(undefined, { dateStyle: "medium", timeStyle: "short" });
@@ -28,8 +29,47 @@ export function Waiting({ row, now, label = "" }: { row: QueueRow; now: Date; la
 }
 
 export function PlanDayText({ row }: { row: QueueRow }) {
-  if (!row.planDay) return <span className="text-ink-soft">{row.planFailed ? "Plan didn't load" : "Loading plan…"}</span>;
-  return <span>{row.planDay.where}</span>;
+  return <span>{row.planDayText}</span>;
+}
+
+/** Whether someone has replied since the question: answered ones still wait to be marked resolved. */
+export function AnswerState({ row }: { row: QueueRow }) {
+  return row.answered ? (
+    <span className="text-ink-soft">Answered, still open</span>
+  ) : (
+    <span className="font-semibold text-pine-900">Waiting for an answer</span>
+  );
+}
+
+export function Assignee({ row }: { row: QueueRow }) {
+  return row.question.assignedToName ? <span>{row.question.assignedToName}</span> : <span className="text-ink-soft">Unassigned</span>;
+}
+
+/** "Assign to me", or "Unassign" on the signed-in person's own question; shown at once, undone if refused. */
+export function AssignButton({ row }: { row: QueueRow }) {
+  const user = useSignedInUser();
+  const assign = useAssignQuestion();
+  const mine = row.question.assignedToId === user.id;
+  const about = <span className="sr-only">: {row.question.customerName}'s question</span>;
+  return (
+    <span className="inline-flex flex-col gap-1">
+      <button
+        type="button"
+        disabled={assign.isPending}
+        aria-busy={assign.isPending || undefined}
+        onClick={() => assign.mutate({ messageId: row.question.messageId, userId: mine ? null : user.id, userName: mine ? null : user.name })}
+        className="inline-flex min-h-11 items-center rounded-lg border-2 border-pine-700 bg-surface px-3 font-semibold whitespace-nowrap text-pine-700 hover:bg-pine-50 disabled:opacity-60"
+      >
+        {mine ? "Unassign" : "Assign to me"}
+        {about}
+      </button>
+      {assign.isError && (
+        <span role="alert" className="text-sm text-rust-700">
+          {errorMessage(assign.error)}
+        </span>
+      )}
+    </span>
+  );
 }
 
 export function PhotoCount({ row }: { row: QueueRow }) {

@@ -1,5 +1,4 @@
-import type { StoredPlan } from "#shared/schemas/plans";
-import { describePlanDay, type PlanDay } from "#shared/ui/index";
+import type { QueuePlanDay } from "#shared/schemas/question-queue";
 import type { QueuedQuestion } from "../api/get-open-questions.ts";
 
 export const QUEUE_FILTERS = ["all", "mine", "unassigned", "overdue"] as const;
@@ -12,38 +11,50 @@ export const QUEUE_FILTER_LABELS: Record<QueueFilter, string> = {
   overdue: "Overdue",
 };
 
+const phaseNames: Record<string, string> = {
+  prep: "preparation",
+  germination: "germination",
+  establishment: "establishment",
+  maturing: "maturing",
+};
+
 export interface QueueRow {
   question: QueuedQuestion;
-  /** Undefined while the plan is still loading (or failed): the row shows without it. */
-  plan: StoredPlan | undefined;
-  planDay: PlanDay | undefined;
-  /** The plan didn't load: the row says so instead of "loading" for ever. */
-  planFailed: boolean;
+  /** "day 9 of the germination phase", from the plan day the server worked out on the lawn's calendar. */
+  planDayText: string;
+  /** A staff answer came after the question, but nobody marked it resolved. */
+  answered: boolean;
 }
 
-export function buildRows(questions: readonly QueuedQuestion[], plans: Map<number, StoredPlan>, failed: Set<number>, now: Date): QueueRow[] {
-  return questions.map((question) => {
-    const plan = plans.get(question.planId);
-    return { question, plan, planDay: plan ? describePlanDay(plan, now) : undefined, planFailed: failed.has(question.planId) };
-  });
+export function describeQueuePlanDay(day: QueuePlanDay): string {
+  if (day.phase && day.phase !== "prep" && day.dayOfPhase !== null) return `day ${day.dayOfPhase} of the ${phaseNames[day.phase] ?? day.phase} phase`;
+  if (day.dayOfPlan === null) return "before the visit";
+  return `day ${day.dayOfPlan} after the visit`;
+}
+
+export function isAnswered(question: QueuedQuestion): boolean {
+  return question.lastAnsweredAt !== null && Date.parse(question.lastAnsweredAt) > Date.parse(question.waitingSince);
+}
+
+export function buildRows(questions: readonly QueuedQuestion[]): QueueRow[] {
+  return questions.map((question) => ({ question, planDayText: describeQueuePlanDay(question.planDay), answered: isAnswered(question) }));
 }
 
 function matchesFilter(row: QueueRow, filter: QueueFilter, userId: number): boolean {
-  const assignedTo = row.question.assignedToId ?? null;
   switch (filter) {
     case "all":
       return true;
     case "mine":
-      return assignedTo === userId;
+      return row.question.assignedToId === userId;
     case "unassigned":
-      return assignedTo === null;
+      return row.question.assignedToId === null;
     case "overdue":
       return row.question.overdue;
   }
 }
 
 function matchesService(row: QueueRow, service: string | null): boolean {
-  return service === null || (row.plan?.services.includes(service) ?? false);
+  return service === null || row.question.services.includes(service);
 }
 
 export function filterRows(rows: readonly QueueRow[], filter: QueueFilter, service: string | null, userId: number): QueueRow[] {
@@ -61,7 +72,7 @@ export function countByService(rows: readonly QueueRow[], filter: QueueFilter, u
   const counts = new Map<string, number>();
   for (const row of rows) {
     if (!matchesFilter(row, filter, userId)) continue;
-    for (const service of row.plan?.services ?? []) counts.set(service, (counts.get(service) ?? 0) + 1);
+    for (const service of row.question.services) counts.set(service, (counts.get(service) ?? 0) + 1);
   }
   return counts;
 }
