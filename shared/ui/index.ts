@@ -31,3 +31,4 @@ export { formatCalendarDay, todayInZone, localToday, relativeDay, waitingTime } 
 export { describePlanDay, type PlanDay } from "./plan-day.ts";
 export { FieldError } from "./field-error.tsx";
 export { SERVICE_LABELS, serviceLabel, speciesLabel } from "./service-labels.ts";
+export { useDebouncedValue } from "./use-debounced-value.ts";

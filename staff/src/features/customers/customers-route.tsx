@@ -1,9 +1,8 @@
 import { useState } from "react";
 import { useSearchParams } from "react-router-dom";
-import { EmptyState, ErrorState, LoadingState, Page, TextField } from "#shared/ui/index";
+import { EmptyState, ErrorState, LoadingState, Page, TextField, useDebouncedValue } from "#shared/ui/index";
 import { CUSTOMER_PAGE_SIZE, useCustomerSearch } from "./api/search-customers.ts";
 import { CustomerResults } from "./components/customer-results.tsx";
-import { useDebouncedValue } from "./lib/use-debounced-value.ts";
 
 /** Find a customer by name, address or phone. The search lives in the address, so Back returns to it. */
 export function CustomersRoute() {

@@ -1,7 +1,7 @@
 import { useMemo } from "react";
 import { FormProvider, useForm } from "react-hook-form";
 import type { PlanInputRaw } from "#shared/engine/index";
-import { Notice, Page } from "#shared/ui/index";
+import { Notice, Page, useDebouncedValue } from "#shared/ui/index";
 import { useCurrentProgram } from "./api/get-current-program.ts";
 import { usePreviewPlan } from "./api/preview-plan.ts";
 import { ErrorSummary } from "./components/error-summary.tsx";
@@ -11,7 +11,6 @@ import { defaultPreviewValues } from "./lib/default-values.ts";
 import { FieldErrorsContext, groupErrorPaths, leafPaths, placeServerErrors } from "./lib/field-errors.ts";
 import type { PreviewFormValues } from "./lib/form-values.ts";
 import { checkPreviewForm } from "./lib/to-plan-input.ts";
-import { useDebouncedValue } from "./lib/use-debounced-value.ts";
 import { useLastNonNull } from "./lib/use-last-non-null.ts";
 
 /** Long enough to skip the keystrokes in "6000", short enough to feel live. */

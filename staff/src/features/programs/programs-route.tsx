@@ -1,7 +1,7 @@
 import { useMemo, useState } from "react";
 import { useForm } from "react-hook-form";
 import type { NumericSettingKey } from "#shared/engine/index";
-import { ErrorState, LoadingState, Notice, Page, isApiRequestError } from "#shared/ui/index";
+import { ErrorState, LoadingState, Notice, Page, isApiRequestError, useDebouncedValue } from "#shared/ui/index";
 import { useProgram, type ProgramWithBounds } from "./api/get-program.ts";
 import { useSamplePlan } from "./api/preview-sample-plan.ts";
 import { useSaveProgram } from "./api/save-program.ts";
@@ -14,7 +14,6 @@ import { countMovedMilestones } from "./lib/milestones.ts";
 import { sampleVisitInput } from "./lib/sample-visit.ts";
 import { settingGroups, settingLabels } from "./lib/setting-labels.ts";
 import { changedFields, checkSettings, formValuesOf, type SettingsErrors, type SettingsField, type SettingsFormValues } from "./lib/settings-form.ts";
-import { useDebouncedValue } from "./lib/use-debounced-value.ts";
 
 /** Long enough to skip the keystrokes in "21", short enough to feel live. */
 const PREVIEW_DELAY_MS = 300;

@@ -1,9 +1,8 @@
 import { useState } from "react";
-import { Button, FieldError, TextField } from "#shared/ui/index";
+import { Button, FieldError, TextField, useDebouncedValue } from "#shared/ui/index";
 import { useCustomerSearch } from "../api/search-customers.ts";
 import type { ChosenLawn } from "../lib/chosen-lawn.ts";
 import { fieldId } from "../lib/form-values.ts";
-import { useDebouncedValue } from "../lib/use-debounced-value.ts";
 
 export interface PropertyPickerProps {
   chosen: ChosenLawn | null;

@@ -1,6 +1,9 @@
 import { useEffect, useState } from "react";
 
-/** The value once it has stopped changing for `delayMs`, so typing "21" asks for one preview, not two. */
+/**
+ * The value once it has stopped changing for `delayMs`: one search or preview per pause in
+ * typing, not per key. Compare by value (strings, numbers) so re-renders don't restart the wait.
+ */
 export function useDebouncedValue<T>(value: T, delayMs: number): T {
   const [settled, setSettled] = useState(value);
   useEffect(() => {
