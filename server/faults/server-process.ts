@@ -16,6 +16,8 @@ export type ServerUnderTest = {
   fakes: RunningFakes;
   process: ChildProcess;
   exited: Promise<number | null>;
+  /** What the server wrote to stderr so far, to explain a failure. */
+  stderr(): string;
   stop(): Promise<void>;
 };
 
@@ -65,6 +67,7 @@ export async function startServerProcess(options: { clusterName: string; pgPort:
     fakes,
     process: child,
     exited,
+    stderr: () => stderr,
     stop: async () => {
       if (child.exitCode === null) {
         child.kill("SIGKILL");

@@ -29,17 +29,25 @@ export const apiNotFound: RequestHandler = (req, _res, next) => {
   next(new HttpError(404, "not_found", `No API route for ${req.method} ${req.path}.`));
 };
 
-/** Database unreachable or overloaded: the client may retry shortly. */
+/** Database unreachable, restarting or overloaded: the client may retry shortly. */
+const unavailableCodes = new Set([
+  "ECONNREFUSED", "ECONNRESET", "EPIPE", "ETIMEDOUT",
+  "57P01", "57P02", "57P03", // admin shutdown, crash shutdown, cannot connect now
+  "08000", "08001", "08003", "08006", // connection exceptions
+  "53300", // too many connections
+]);
+const unavailableMessages = [
+  "Knex: Timeout acquiring a connection",
+  "Connection terminated",
+  "Client has encountered a connection error",
+  "terminating connection",
+  "the database system is starting up",
+  "the database system is shutting down",
+];
 function isDatabaseUnavailable(err: unknown): boolean {
   const code = (err as { code?: string } | null)?.code;
   const message = err instanceof Error ? err.message : "";
-  return (
-    code === "ECONNREFUSED" ||
-    code === "57P01" || // admin shutdown
-    code === "57P03" || // cannot connect now
-    code === "53300" || // too many connections
-    message.includes("Knex: Timeout acquiring a connection")
-  );
+  return (code !== undefined && unavailableCodes.has(code)) || unavailableMessages.some((m) => message.includes(m));
 }
 
 /**
