@@ -48,7 +48,12 @@ export async function seed(knex: Knex): Promise<void> {
           lawn: JSON.stringify(c.lawn),
         })
         .onConflict(["customer_id", "label"])
-        .merge(["street", "lawn_area_ft2"]);
+        // The lawn facts follow the current seed data; the frost date set by a later seed is kept.
+        .merge({
+          street: c.street,
+          lawn_area_ft2: c.lawnAreaFt2,
+          lawn: trx.raw("excluded.lawn || jsonb_strip_nulls(jsonb_build_object('expectedFirstFrost', properties.lawn -> 'expectedFirstFrost'))"),
+        });
     }
   });
 }
