@@ -1,4 +1,5 @@
-import { useId, type InputHTMLAttributes, type Ref } from "react";
+import type { InputHTMLAttributes, Ref } from "react";
+import { LabelledField, controlBorder, useFieldIds } from "./labelled-field.tsx";
 
 export interface TextFieldProps extends Omit<InputHTMLAttributes<HTMLInputElement>, "size"> {
   label: string;
@@ -11,40 +12,18 @@ export interface TextFieldProps extends Omit<InputHTMLAttributes<HTMLInputElemen
 
 /** A labelled text input that takes react-hook-form's `register()` spread directly. */
 export function TextField({ label, hint, error, id, className = "", ref, ...input }: TextFieldProps) {
-  const autoId = useId();
-  const inputId = id ?? autoId;
-  const hintId = hint ? `${inputId}-hint` : undefined;
-  const errorId = error ? `${inputId}-error` : undefined;
-  const describedBy = [hintId, errorId].filter(Boolean).join(" ") || undefined;
-
+  const ids = useFieldIds(id, hint, error);
   return (
-    <div className={`flex flex-col gap-1 ${className}`}>
-      <label htmlFor={inputId} className="font-semibold">
-        {label}
-      </label>
-      {hint && (
-        <p id={hintId} className="text-ink-soft text-base">
-          {hint}
-        </p>
-      )}
+    <LabelledField ids={ids} label={label} hint={hint} error={error} className={className}>
       <input
-        id={inputId}
+        id={ids.controlId}
         ref={ref}
         aria-invalid={error ? true : undefined}
-        aria-describedby={describedBy}
+        aria-describedby={ids.describedBy}
         // 18px text keeps mobile browsers from zooming in on focus.
-        className={
-          "min-h-12 w-full rounded-lg border-2 bg-surface px-3 py-2 text-lg text-ink " +
-          (error ? "border-rust-700" : "border-line-strong")
-        }
+        className={`min-h-12 w-full rounded-lg border-2 bg-surface px-3 py-2 text-lg text-ink ${controlBorder(error)}`}
         {...input}
       />
-      {error && (
-        <p id={errorId} className="flex items-start gap-1 font-semibold text-rust-700">
-          <span aria-hidden="true">⚠</span>
-          {error}
-        </p>
-      )}
-    </div>
+    </LabelledField>
   );
 }

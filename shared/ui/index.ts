@@ -32,3 +32,4 @@ export { describePlanDay, type PlanDay } from "./plan-day.ts";
 export { FieldError } from "./field-error.tsx";
 export { SERVICE_LABELS, serviceLabel, speciesLabel } from "./service-labels.ts";
 export { useDebouncedValue } from "./use-debounced-value.ts";
+export { LabelledField, controlBorder, useFieldIds, type FieldIds } from "./labelled-field.tsx";

@@ -1,4 +1,5 @@
-import { useId, type Ref, type SelectHTMLAttributes } from "react";
+import type { Ref, SelectHTMLAttributes } from "react";
+import { LabelledField, controlBorder, useFieldIds } from "./labelled-field.tsx";
 
 export interface SelectOption {
   value: string;
@@ -17,27 +18,15 @@ export interface SelectFieldProps extends Omit<SelectHTMLAttributes<HTMLSelectEl
 
 /** A labelled native select (best on phones) that takes react-hook-form's `register()` spread. */
 export function SelectField({ label, hint, error, options, placeholderOption, id, className = "", ref, ...select }: SelectFieldProps) {
-  const autoId = useId();
-  const selectId = id ?? autoId;
-  const hintId = hint ? `${selectId}-hint` : undefined;
-  const errorId = error ? `${selectId}-error` : undefined;
-  const describedBy = [hintId, errorId].filter(Boolean).join(" ") || undefined;
+  const ids = useFieldIds(id, hint, error);
   return (
-    <div className={`flex flex-col gap-1 ${className}`}>
-      <label htmlFor={selectId} className="font-semibold">
-        {label}
-      </label>
-      {hint && (
-        <p id={hintId} className="text-base text-ink-soft">
-          {hint}
-        </p>
-      )}
+    <LabelledField ids={ids} label={label} hint={hint} error={error} className={className}>
       <select
-        id={selectId}
+        id={ids.controlId}
         ref={ref}
         aria-invalid={error ? true : undefined}
-        aria-describedby={describedBy}
-        className={`min-h-12 w-full rounded-lg border-2 bg-surface px-3 py-2 text-lg text-ink ${error ? "border-rust-700" : "border-line-strong"}`}
+        aria-describedby={ids.describedBy}
+        className={`min-h-12 w-full rounded-lg border-2 bg-surface px-3 py-2 text-lg text-ink ${controlBorder(error)}`}
         {...select}
       >
         {placeholderOption !== undefined && <option value="">{placeholderOption}</option>}
@@ -47,12 +36,6 @@ export function SelectField({ label, hint, error, options, placeholderOption, id
           </option>
         ))}
       </select>
-      {error && (
-        <p id={errorId} className="flex items-start gap-1 font-semibold text-rust-700">
-          <span aria-hidden="true">⚠</span>
-          {error}
-        </p>
-      )}
-    </div>
+    </LabelledField>
   );
 }

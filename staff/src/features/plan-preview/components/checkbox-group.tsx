@@ -1,5 +1,5 @@
+import { FieldError } from "#shared/ui/index";
 import type { ReactNode } from "react";
-import { FieldErrorText } from "./field-error-text.tsx";
 
 export interface CheckboxGroupProps {
   id: string;
@@ -22,7 +22,7 @@ export function CheckboxGroup({ id, legend, hint, error, children }: CheckboxGro
         </p>
       )}
       <div className="grid gap-x-4 sm:grid-cols-2">{children}</div>
-      {error && <FieldErrorText id={errorId} message={error} />}
+      {error && <FieldError id={errorId} message={error} />}
     </fieldset>
   );
 }

@@ -1,10 +1,9 @@
 import { use } from "react";
 import { useFieldArray, useFormContext } from "react-hook-form";
-import { Button, TextField } from "#shared/ui/index";
+import { Button, TextField, FieldError } from "#shared/ui/index";
 import { emptyProductRow, type PreviewFormValues } from "../lib/form-values.ts";
 import { FieldErrorsContext, fieldId } from "../lib/field-errors.ts";
 import { Checkbox } from "./checkbox.tsx";
-import { FieldErrorText } from "./field-error-text.tsx";
 import { FormSection } from "./form-section.tsx";
 
 /** The engine accepts up to 10 products on one visit. */
@@ -46,7 +45,7 @@ export function ProductFields() {
                   />
                 ))}
               </div>
-              {analysisError && <FieldErrorText message={analysisError} />}
+              {analysisError && <FieldError message={analysisError} />}
             </fieldset>
             <TextField
               id={fieldId(`visit.products.${i}.rateLbPer1000`)}
@@ -63,7 +62,7 @@ export function ProductFields() {
           </fieldset>
         );
       })}
-      {errors["visit.products"] && <FieldErrorText message={errors["visit.products"]} />}
+      {errors["visit.products"] && <FieldError message={errors["visit.products"]} />}
       {fields.length < MAX_PRODUCTS && (
         <Button variant="secondary" className="self-start" onClick={() => append(emptyProductRow())}>
           Add a product

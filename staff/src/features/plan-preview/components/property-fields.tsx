@@ -1,14 +1,13 @@
 import { use } from "react";
 import { useFormContext, useWatch } from "react-hook-form";
 import { SPECIES } from "#shared/engine/index";
-import { TextField } from "#shared/ui/index";
+import { TextField, FieldError } from "#shared/ui/index";
 import type { IrrigationKind, LawnCondition, PreviewFormValues } from "../lib/form-values.ts";
 import { FieldErrorsContext, fieldId } from "../lib/field-errors.ts";
 import { IRRIGATION_LABELS, LAWN_CONDITION_LABELS, speciesLabel } from "../lib/labels.ts";
 import { daysAfter } from "../lib/local-dates.ts";
 import { Checkbox } from "./checkbox.tsx";
 import { CheckboxGroup } from "./checkbox-group.tsx";
-import { FieldErrorText } from "./field-error-text.tsx";
 import { FormSection } from "./form-section.tsx";
 import { SelectField } from "./select-field.tsx";
 import { TimeZoneField } from "./time-zone-field.tsx";
@@ -77,7 +76,7 @@ export function PropertyFields() {
           />
         </>
       )}
-      {irrigationError && <FieldErrorText message={irrigationError} />}
+      {irrigationError && <FieldError message={irrigationError} />}
 
       <TextField
           id={fieldId("property.currentMowingHeightIn")}

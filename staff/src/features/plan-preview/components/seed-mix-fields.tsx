@@ -1,12 +1,11 @@
 import { use } from "react";
 import { useFieldArray, useFormContext, useWatch } from "react-hook-form";
 import { SEED_MIX_SUM_TOLERANCE, SPECIES } from "#shared/engine/index";
-import { Button, TextField } from "#shared/ui/index";
+import { Button, TextField, FieldError } from "#shared/ui/index";
 import { emptySeedRow, type PreviewFormValues } from "../lib/form-values.ts";
 import { FieldErrorsContext, fieldId } from "../lib/field-errors.ts";
 import { speciesLabel } from "../lib/labels.ts";
 import { formatFigure } from "../lib/numbers.ts";
-import { FieldErrorText } from "./field-error-text.tsx";
 import { FormSection } from "./form-section.tsx";
 import { SelectField } from "./select-field.tsx";
 
@@ -77,13 +76,13 @@ export function SeedMixFields() {
         {/* The engine's message names the total too, so show one or the other. The engine only
             checks the sum once the rest of the visit is valid, hence our own running total. */}
         {mixError ? (
-          <FieldErrorText message={mixError} />
+          <FieldError message={mixError} />
         ) : (
           fields.length > 0 &&
           (totalIsRight ? (
             <p className="font-semibold text-pine-800">The mix adds up to {formatFigure(total)} %</p>
           ) : (
-            <FieldErrorText message={`The mix adds up to ${formatFigure(total)} %, not 100 %`} />
+            <FieldError message={`The mix adds up to ${formatFigure(total)} %, not 100 %`} />
           ))
         )}
       </div>
