@@ -3,6 +3,7 @@ import type { Config } from "../../config.ts";
 import type { Messenger, OutgoingEmail, OutgoingSms } from "../../messaging/messenger.ts";
 import { hashToken, newSignInToken } from "./tokens.ts";
 import { insertToken } from "./repo.ts";
+import { escapeHtml } from "../../messaging/escape-html.ts";
 
 /** An invitation may sit unread for a while after the visit; it still works once only. */
 export const invitationDays = 7;
@@ -43,9 +44,6 @@ function invitationEmail(to: string, who: Invitee, link: string): OutgoingEmail 
 function invitationSms(to: string, who: Invitee, link: string): OutgoingSms {
   return { to, body: `${who.smsSenderName}: your lawn care plan is ready. Open it here (works once): ${link}` };
 }
-
-const escapeHtml = (s: string) =>
-  s.replace(/[&<>"']/g, (c) => ({ "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'": "&#39;" })[c]!);
 
 /**
  * After a seeding visit the homeowner gets a one-time link to their new plan, by e-mail when

@@ -1,7 +1,5 @@
 import type { OutgoingEmail, OutgoingSms } from "../../messaging/messenger.ts";
-
-const escapeHtml = (s: string) =>
-  s.replace(/[&<>"']/g, (c) => ({ "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'": "&#39;" })[c]!);
+import { escapeHtml } from "../../messaging/escape-html.ts";
 
 export function signInEmail(to: string, firstName: string, companyName: string, link: string, minutes: number): OutgoingEmail {
   const text = [

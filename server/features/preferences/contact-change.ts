@@ -1,6 +1,7 @@
 import type { Config } from "../../config.ts";
 import type { Db } from "../../db.ts";
 import type { Messenger } from "../../messaging/messenger.ts";
+import { escapeHtml } from "../../messaging/escape-html.ts";
 import { HttpError } from "../../http/errors.ts";
 import { parseContact } from "../auth/contact.ts";
 import { hashToken, newSignInToken } from "../auth/tokens.ts";
@@ -71,8 +72,6 @@ export async function requestContactChange(
   }
   return wanted.map((w) => w.kind);
 }
-
-const escapeHtml = (s: string) => s.replace(/[&<>"']/g, (c) => ({ "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'": "&#39;" })[c]!);
 
 export type ConfirmResult = { kind: ContactKind; value: string; customerId: number };
 

@@ -1,9 +1,9 @@
+import { escapeHtml } from "../../messaging/escape-html.ts";
+
 /** Tiny stand-alone pages for the unsubscribe link (no app bundle, works in any mail client's browser). */
 const page = (body: string) => `<!doctype html>
 <html lang="en"><head><meta charset="utf-8"><meta name="viewport" content="width=device-width, initial-scale=1"><title>Reminder e-mails</title></head>
 <body style="font-family:Arial,Helvetica,sans-serif;max-width:480px;margin:48px auto;padding:0 16px;color:#1f2a1c">${body}</body></html>`;
-
-const escapeHtml = (s: string) => s.replace(/[&<>"']/g, (c) => ({ "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'": "&#39;" })[c]!);
 
 export const unsubscribeFormPage = (action: string) =>
   page(`<h1 style="font-size:22px">Stop reminder e-mails?</h1>

@@ -1,7 +1,5 @@
 import type { OutgoingEmail } from "../../messaging/messenger.ts";
-
-const escapeHtml = (s: string) =>
-  s.replace(/[&<>"']/g, (c) => ({ "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'": "&#39;" })[c]!);
+import { escapeHtml } from "../../messaging/escape-html.ts";
 
 const roleWords = { technician: "a technician", manager: "a manager" } as const;
 

@@ -1,4 +1,5 @@
 import { dateLabel, timeLabel, type Language, type ReminderStep } from "./wording.ts";
+import { escapeHtml } from "../../../messaging/escape-html.ts";
 
 /** Our own plain template: a heading, the day's steps, a button to the plan, and how to stop. Inline styles only (mail clients drop <style>). */
 
@@ -12,8 +13,6 @@ export type EmailFrame = {
 };
 
 export type ComposedEmail = { subject: string; text: string; html: string };
-
-const escapeHtml = (s: string) => s.replace(/[&<>"']/g, (c) => ({ "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'": "&#39;" })[c]!);
 
 const words = {
   en: {
