@@ -35,6 +35,8 @@ export interface FakeSmsGateway {
   url: string;
   port: number;
   messages(): RecordedSms[];
+  /** API requests received and still waiting out the configured latency: accepted, not yet answered. */
+  requestsInLatency(): number;
   clear(): void;
   faults(): SmsFaultSettings;
   setFaults(patch: Partial<SmsFaultSettings>): SmsFaultSettings;
@@ -93,11 +95,16 @@ export async function startSmsGateway(options: SmsGatewayOptions): Promise<FakeS
 
   // Everything under /2010-04-01 is the Twilio-shaped REST API: outage, latency and HTTP Basic auth first.
   const api = express.Router();
+  let inLatency = 0;
   api.use(async (req, res, next) => {
     const outage = faults.outage();
     if (outage) return void sendError(res, outage);
     const latency = faults.latencyMs();
-    if (latency > 0) await new Promise((resolve) => setTimeout(resolve, latency));
+    if (latency > 0) {
+      inLatency += 1;
+      await new Promise((resolve) => setTimeout(resolve, latency));
+      inLatency -= 1;
+    }
     const credentials = parseBasicAuth(req.headers.authorization);
     if (!credentials || credentials.user !== options.accountSid || credentials.password !== options.authToken) {
       res.setHeader("WWW-Authenticate", 'Basic realm="Twilio API"');
@@ -222,6 +229,7 @@ export async function startSmsGateway(options: SmsGatewayOptions): Promise<FakeS
     url: running.url,
     port: running.port,
     messages: () => log.list(),
+    requestsInLatency: () => inLatency,
     clear: () => {
       log.clear();
       optedOut.clear();

@@ -69,7 +69,12 @@ describe("the worker process", () => {
     const output: string[] = [];
     try {
       const first = startWorker(output);
-      await eventually(async () => sendsPerText(ctx.fakes.sms.messages(), phones).size >= 40, 30_000, "the first worker to get going");
+      // Killed only while the fake holds some of its requests: those texts are accepted but not yet answered.
+      await eventually(
+        async () => sendsPerText(ctx.fakes.sms.messages(), phones).size >= 40 && ctx.fakes.sms.requestsInLatency() > 0,
+        30_000,
+        "the first worker to get going with texts held at the fake",
+      );
       signal(first, "SIGKILL");
       await exited(first);
       const atKill = await stateCounts(ctx.db, ids);
