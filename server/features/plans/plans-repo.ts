@@ -41,7 +41,7 @@ export const toHeader = (r: HeaderRow): PlanHeader => ({
   progress: { done: Number(r.done), skipped: Number(r.skipped), total: Number(r.total) },
 });
 
-function headerQuery(db: Db) {
+export function headerQuery(db: Db) {
   return db("care_plans")
     .join("properties", "properties.id", "care_plans.property_id")
     .join("customers", "customers.id", "properties.customer_id")
@@ -77,17 +77,6 @@ export async function plansOfCustomer(db: Db, customerId: number): Promise<PlanH
     .where("customers.id", customerId)
     .orderBy([{ column: "service_visits.visit_date", order: "desc" }, { column: "care_plans.id", order: "desc" }]);
   return (rows as HeaderRow[]).map(toHeader);
-}
-
-/** The plan header with what Today shows beside the steps: hold-offs, warnings and caution texts. */
-export type TodayPlanRow = HeaderRow & Pick<PlanRow, "company_id" | "customer_id" | "hold_offs" | "warnings"> & { cautions: Plan["cautions"] };
-
-export async function loadTodayPlanRow(db: Db, planId: number): Promise<TodayPlanRow | undefined> {
-  // Only the cautions out of the figures: the whole figures document is large and Today is the hottest request.
-  return (await headerQuery(db)
-    .select("customers.company_id", "customers.id as customer_id", "care_plans.hold_offs", "care_plans.warnings", db.raw("care_plans.figures -> 'cautions' as cautions"))
-    .where("care_plans.id", planId)
-    .first()) as TodayPlanRow | undefined;
 }
 
 export async function loadPlanRow(db: Db, planId: number): Promise<PlanRow | undefined> {

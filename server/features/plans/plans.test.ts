@@ -137,6 +137,27 @@ describe("changing and recomputing a plan", () => {
     expect(bad.status).toBe(400);
   });
 
+  it("Today's one-query answer agrees with the whole plan: today's steps with their state, the next milestone, active hold-offs", async () => {
+    const { planId } = (await technician.post("/api/visits").send(visitBody({ date: addDays(today(), -1) })).expect(201)).body;
+    const ruth = await signInCustomer(ctx, "ruth.okonkwo@mail.example");
+    const first = (await ruth.get(`/api/plans/${planId}/today`).expect(200)).body;
+    await ruth.put(`/api/plans/${planId}/steps/${first.steps[0].id}/state`).send({ state: "skipped", reason: "Rain" }).expect(200);
+
+    const view = (await ruth.get(`/api/plans/${planId}/today`).expect(200)).body;
+    const whole = (await ruth.get(`/api/plans/${planId}`).expect(200)).body.plan;
+    type Step = { id: number; date: string; kind: string; title: string };
+    const day = view.today as string;
+    expect(view.steps).toEqual(whole.steps.filter((s: Step) => s.date === day));
+    expect(view.steps[0]).toMatchObject({ state: "skipped", skipReason: "Rain", stateChangedAt: expect.stringMatching(/^\d{4}-\d\d-\d\dT/) });
+    const next = whole.steps.find((s: Step) => s.date > day && ["mow", "check_in_photo", "feed"].includes(s.kind));
+    expect(next).toBeDefined();
+    expect(view.nextMilestone).toEqual({ kind: next.kind, date: next.date, title: next.title });
+    const active = whole.holdOffs.filter((h: { start: string; end: string }) => h.start <= day && day <= h.end);
+    expect(active.length).toBeGreaterThan(0);
+    expect(view.activeHoldOffs).toEqual(active);
+    expect(view.plan).toEqual(expect.objectContaining({ id: planId, progress: expect.objectContaining({ skipped: 1 }) }));
+  });
+
   it("regenerates idempotently and keeps what the homeowner did", async () => {
     const { planId } = (await technician.post("/api/visits").send(visitBody()).expect(201)).body;
     const first = (await stepRows(planId)).find((s) => s.date <= today())!;

@@ -8,6 +8,7 @@ import type { SessionUser } from "../../auth/session-user.ts";
 import { currentProgram, programVersion } from "./program-repo.ts";
 import * as plans from "./plans-repo.ts";
 import * as steps from "./steps-repo.ts";
+import { loadToday } from "./today-repo.ts";
 
 /** Runs after every change to a plan's steps, inside the same transaction (e.g. to reschedule reminders). */
 export type PlanChangeHook = (trx: Db, planId: number) => Promise<void>;
@@ -85,27 +86,22 @@ export async function loadStoredPlan(db: Db, planId: number): Promise<StoredPlan
   };
 }
 
-const milestoneKinds = ["mow", "check_in_photo", "feed"];
-
 /**
  * Today's steps, active hold-offs and the next milestone, in the lawn's own time zone.
- * The homeowner's most frequent request: it checks access on the plan row it loads anyway
- * and reads only today's and the upcoming milestone steps.
+ * The homeowner's most frequent request: one query, which also decides access.
  */
 export async function todayView(db: Db, user: SessionUser, planId: number, now = new Date()): Promise<TodayResponse> {
-  const row = await plans.loadTodayPlanRow(db, planId);
+  const row = await loadToday(db, planId, now);
   if (!row || row.company_id !== user.companyId || (user.role === "customer" && row.customer_id !== user.customerId)) {
     throw notFound("That care plan");
   }
-  const today = localDateAt(row.time_zone, now);
-  const rows = await steps.stepsForToday(db, planId, today, milestoneKinds);
-  const upcoming = rows.find((s) => s.date > today);
+  const { today } = row;
   return {
     today,
     plan: plans.toHeader(row),
-    steps: rows.filter((s) => s.date === today).map(steps.toStoredStep),
+    steps: row.steps.map(steps.toStoredStep),
     activeHoldOffs: row.hold_offs.filter((h) => h.start <= today && today <= h.end).map((h) => ({ ...h, cautions: [...h.cautions] })),
-    nextMilestone: upcoming ? { kind: upcoming.kind, date: upcoming.date, title: upcoming.title } : null,
+    nextMilestone: row.next_milestone,
     warnings: [...row.warnings],
     cautions: row.cautions.map((c) => ({ ...c })),
   };

@@ -2,7 +2,7 @@ import type { PlanStep } from "#shared/engine/index";
 import type { StoredStep } from "#shared/schemas/plans";
 import type { Db } from "../../db.ts";
 
-type StepRow = {
+export type StepRow = {
   id: number;
   plan_id: number;
   key: string;
@@ -75,7 +75,7 @@ export function toEngineStep(row: StepRow): PlanStep {
   };
 }
 
-const stepColumns = ["id", "plan_id", "key", "date", "phase", "kind", "title", "content", "state", "state_changed_at", "skip_reason"];
+export const stepColumns = ["id", "plan_id", "key", "date", "phase", "kind", "title", "content", "state", "state_changed_at", "skip_reason"];
 
 export async function stepsOfPlan(db: Db, planId: number): Promise<StepRow[]> {
   return db("plan_steps")
@@ -86,15 +86,6 @@ export async function stepsOfPlan(db: Db, planId: number): Promise<StepRow[]> {
 
 export async function stepsOfPlanOn(db: Db, planId: number, date: string): Promise<StepRow[]> {
   return db("plan_steps").where({ plan_id: planId, date }).orderBy("id").select<StepRow[]>(stepColumns);
-}
-
-/** Today's steps and the upcoming ones of the given kinds, in date order: what the Today screen needs. */
-export async function stepsForToday(db: Db, planId: number, today: string, milestoneKinds: readonly string[]): Promise<StepRow[]> {
-  return db("plan_steps")
-    .where({ plan_id: planId })
-    .andWhere((q) => q.where("date", today).orWhere((m) => m.where("date", ">", today).whereIn("kind", milestoneKinds)))
-    .orderBy([{ column: "date" }, { column: "id" }])
-    .select<StepRow[]>(stepColumns);
 }
 
 export async function findStep(db: Db, planId: number, stepId: number): Promise<StepRow | undefined> {

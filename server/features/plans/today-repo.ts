@@ -1,0 +1,52 @@
+import type { Plan } from "#shared/engine/index";
+import type { Db } from "../../db.ts";
+import { headerQuery, toHeader, type PlanRow } from "./plans-repo.ts";
+import { stepColumns, type StepRow } from "./steps-repo.ts";
+
+/** Steps the Today screen announces ahead of time as the next milestone. */
+const milestoneKinds = ["mow", "check_in_photo", "feed"];
+
+type StepJson = Omit<StepRow, "state_changed_at"> & { state_changed_at: string | null };
+
+export type TodayRow = Parameters<typeof toHeader>[0] &
+  Pick<PlanRow, "company_id" | "customer_id" | "hold_offs" | "warnings"> & {
+    cautions: Plan["cautions"];
+    today: string;
+    steps: StepRow[];
+    next_milestone: { kind: string; date: string; title: string } | null;
+  };
+
+/**
+ * Everything the Today screen shows, in one round trip: Today is the homeowner's most frequent
+ * request, and at load each extra query costs more than the work inside it. "Today" is the
+ * calendar date in the lawn's own time zone at `now`; the steps come through the
+ * (plan_id, date) index, the caution texts only out of the large figures document.
+ */
+export async function loadToday(db: Db, planId: number, now: Date): Promise<TodayRow | undefined> {
+  const columns = stepColumns.join(", ");
+  const row = await headerQuery(db)
+    .joinRaw("cross join lateral (select (?::timestamptz at time zone properties.time_zone)::date as local_today) as here", [now.toISOString()])
+    .select(
+      "customers.company_id",
+      "customers.id as customer_id",
+      "care_plans.hold_offs",
+      "care_plans.warnings",
+      db.raw("care_plans.figures -> 'cautions' as cautions"),
+      db.raw("to_char(here.local_today, 'YYYY-MM-DD') as today"),
+      db.raw(
+        `coalesce((select json_agg(s order by s.id) from (select ${columns} from plan_steps
+           where plan_id = care_plans.id and date = here.local_today) as s), '[]') as steps`,
+      ),
+      db.raw(
+        `(select json_build_object('kind', kind, 'date', date, 'title', title) from plan_steps
+           where plan_id = care_plans.id and date > here.local_today and kind in (${milestoneKinds.map(() => "?").join(", ")})
+           order by date, id limit 1) as next_milestone`,
+        milestoneKinds,
+      ),
+    )
+    .where("care_plans.id", planId)
+    .first<(Omit<TodayRow, "steps"> & { steps: StepJson[] }) | undefined>();
+  if (!row) return undefined;
+  // JSON carries the step's timestamp as text; the rest of the code expects the Date a column gives.
+  return { ...row, steps: row.steps.map((s) => ({ ...s, state_changed_at: s.state_changed_at ? new Date(s.state_changed_at) : null })) };
+}
