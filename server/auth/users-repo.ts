@@ -1,7 +1,7 @@
 import type { Db } from "../db.ts";
 import type { SessionUser } from "./session-user.ts";
 
-type UserRow = {
+export type UserRow = {
   id: number;
   company_id: number;
   role: SessionUser["role"];
@@ -12,7 +12,7 @@ type UserRow = {
   customer_id: number | null;
 };
 
-function toSessionUser(row: UserRow): SessionUser {
+export function toSessionUser(row: UserRow): SessionUser {
   return {
     id: row.id,
     companyId: row.company_id,

@@ -1,0 +1,62 @@
+import type { Request } from "express";
+import type session from "express-session";
+import type connectPgSimple from "connect-pg-simple";
+import type pg from "pg";
+import { toSessionUser, type UserRow } from "./users-repo.ts";
+import type { SessionUser } from "./session-user.ts";
+
+type PgStoreClass = ReturnType<typeof connectPgSimple>;
+type StoredSession = session.SessionData & { [userRead]?: SessionUser | null };
+
+/** Carries the user from the store's read to the request, invisible to the session's JSON and change check. */
+const userRead = Symbol("user read with the session");
+const userOfRequest = new WeakMap<Request, SessionUser | null>();
+
+/*
+ * One round trip for "who is this": the session row and its signed-in, still active user.
+ * The id in the session is checked to be a number before the cast, because a malformed
+ * session must read as signed out, not fail the query. Prepared by name, since every
+ * signed-in request runs it.
+ */
+const sessionWithUser = {
+  name: "session-with-active-user",
+  text: `
+    select s.sess, u.id, u.company_id, u.role, u.name, u.email, u.phone, u.active, c.id as customer_id
+    from sessions s
+    left join users u on u.active and u.id = case when s.sess #>> '{passport,user}' ~ '^[0-9]{1,9}$' then (s.sess #>> '{passport,user}')::int end
+    left join customers c on c.user_id = u.id
+    where s.sid = $1 and s.expire >= now()`,
+};
+
+/**
+ * The PostgreSQL session store (connect-pg-simple) with a read that also loads the signed-in
+ * user, so passport need not ask the database again on every request.
+ */
+export function sessionStoreWithUser(PgStore: PgStoreClass, pool: pg.Pool) {
+  return class SessionStoreWithUser extends PgStore {
+    override get(sid: string, done: (err: unknown, sess?: session.SessionData | null) => void): void {
+      pool.query<{ sess: StoredSession } & Partial<UserRow>>({ ...sessionWithUser, values: [sid] }).then(({ rows: [row] }) => {
+        if (!row) return done(null, null);
+        const sess = row.sess;
+        sess[userRead] = row.id === null || row.id === undefined ? null : toSessionUser(row as UserRow);
+        done(null, sess);
+      }, done);
+    }
+
+    override createSession(req: Request, sess: StoredSession): session.Session & Partial<session.SessionData> {
+      if (userRead in sess) {
+        userOfRequest.set(req, sess[userRead] ?? null);
+        delete sess[userRead];
+      }
+      return super.createSession(req, sess);
+    }
+  };
+}
+
+/**
+ * The user read with this request's session: a user, null when the session's user is gone or
+ * deactivated, undefined when the store did not read one (e.g. a session saved in this request).
+ */
+export function userReadWithSession(req: Request): SessionUser | null | undefined {
+  return userOfRequest.get(req);
+}
