@@ -2,6 +2,7 @@ import { describe, expect, it } from "vitest";
 import sharp from "sharp";
 import { processPhoto } from "./image-pipeline.ts";
 import { HttpError } from "../../http/errors.ts";
+import { jpegScriptPolyglot, pixelMotionPhoto, samsungMotionPhoto, smallJpeg, withAppended, withJpegComment } from "./testing/images.ts";
 
 /** An ISO-BMFF header with the "heic" brand and no decodable image: what an HEVC HEIC looks like to us. */
 function heicHeader(): Buffer {
@@ -34,6 +35,24 @@ describe("image pipeline", () => {
     const err = await refusal(heicHeader());
     expect(err.status).toBe(415);
     expect(err.message).toMatch(/HEIC/);
+  });
+
+  it("refuses a photo that also carries script or markup before decoding it (415 image_contains_code)", async () => {
+    const jpeg = await smallJpeg();
+    for (const polyglot of [withJpegComment(jpeg, "<script>alert(1)</script>"), withAppended(jpeg, "<?php echo 1; ?>"), await jpegScriptPolyglot()]) {
+      const err = await refusal(polyglot);
+      expect(err).toMatchObject({ status: 415, code: "image_contains_code" });
+      expect(err.message).toMatch(/^This file carries more than a photo/);
+    }
+  });
+
+  it("keeps a motion photo's still image and drops the video after the end marker", async () => {
+    for (const photo of [await pixelMotionPhoto(), await samsungMotionPhoto()]) {
+      const out = await processPhoto(photo);
+      expect(out.large).toMatchObject({ width: 320, height: 240 });
+      expect(out.large.data.includes("ftypmp42")).toBe(false);
+      expect((await sharp(out.large.data).metadata()).xmp).toBeUndefined();
+    }
   });
 
   it("refuses GIF, AVIF and TIFF by their bytes", async () => {

@@ -3,6 +3,7 @@ import sharp, { type SharpOptions } from "sharp";
 import { fileTypeFromBuffer } from "file-type";
 import { photoLimits } from "#shared/schemas/questions";
 import { HttpError } from "../../http/errors.ts";
+import { findEmbeddedCode } from "./embedded-code.ts";
 
 /** Longest side of the two copies we keep. The upload itself is never stored. */
 export const photoSizes = { large: 2048, thumb: 400 } as const;
@@ -14,6 +15,13 @@ const accepted: readonly string[] = photoLimits.acceptedTypes;
 
 export const unsupportedType = () =>
   new HttpError(415, "unsupported_type", "Only photos (JPEG, PNG, WebP, HEIC) can be attached.");
+// A polyglot: our own words, and no hint of which marker was found.
+const carriesCode = () =>
+  new HttpError(
+    415,
+    "image_contains_code",
+    "This file carries more than a photo (it contains script or web-page code), so it can't be uploaded. Please send the photo straight from your camera or gallery.",
+  );
 const invalidImage = () =>
   new HttpError(400, "invalid_image", "One of the photos could not be read. It may be damaged or only partly uploaded; please try again.");
 // Phones save HEIC with the HEVC codec, which our image library cannot decode (patent-encumbered).
@@ -40,13 +48,15 @@ async function resizeToJpeg(input: Buffer, longestSide: number, options: SharpOp
 
 /**
  * Checks one uploaded file and makes the two copies we store. The type comes from the
- * bytes (never the name or the client's Content-Type); the pixel count is checked from the
+ * bytes (never the name or the client's Content-Type); a photo that also carries markup or
+ * script (a polyglot) is refused before it is decoded; the pixel count is checked from the
  * header before anything is decoded (decompression bombs); orientation is applied and all
  * metadata dropped by re-encoding.
  */
 export async function processPhoto(upload: Buffer): Promise<ProcessedPhoto> {
   const type = await fileTypeFromBuffer(upload);
   if (!type || !accepted.includes(type.mime)) throw unsupportedType();
+  if (findEmbeddedCode(upload)) throw carriesCode();
   const isHeif = type.mime === "image/heic" || type.mime === "image/heif";
 
   let width: number | undefined;

@@ -7,7 +7,10 @@ import { join, resolve } from "node:path";
 import { photoLimits } from "#shared/schemas/questions";
 import { createTestContext, signInCustomer, signInStaff, type TestContext } from "../../test/harness.ts";
 import { createPlanFixture } from "../questions/testing/plan-fixture.ts";
-import { bytesOver, jpegWithGps, pngDeclaring, smallPng, smallWebp, svgWithScript, truncatedJpeg } from "./testing/images.ts";
+import {
+  bytesOver, gifScriptPolyglot, jpegScriptPolyglot, jpegWithGps, jpegWithXmp, pixelMotionPhoto, pngDeclaring, samsungMotionPhoto, smallJpeg,
+  smallPng, smallWebp, svgWithScript, truncatedJpeg, withAppended, withJpegComment, withPngText,
+} from "./testing/images.ts";
 
 type Agent = ReturnType<typeof request.agent>;
 type Upload = { data: Buffer; filename: string; contentType?: string };
@@ -35,15 +38,21 @@ async function messageCount() {
   return Number(row[0]!.count);
 }
 
+async function photoRowCount() {
+  const row = await ctx.db("photos").count<{ count: string }[]>("* as count");
+  return Number(row[0]!.count);
+}
+
 /** After every refused upload: nothing stored, and the server still answers the next request. */
-async function expectNothingSavedAndServing(before: { messages: number; files: number }) {
+async function expectNothingSavedAndServing(before: { messages: number; files: number; photoRows: number }) {
   expect(await messageCount()).toBe(before.messages);
   expect((await filesUnder(photoDir)).length).toBe(before.files);
+  expect(await photoRowCount()).toBe(before.photoRows);
   await ruth.get(`/api/plans/${planId}/thread`).expect(200);
 }
 
 async function snapshot() {
-  return { messages: await messageCount(), files: (await filesUnder(photoDir)).length };
+  return { messages: await messageCount(), files: (await filesUnder(photoDir)).length, photoRows: await photoRowCount() };
 }
 
 beforeAll(async () => {
@@ -195,6 +204,86 @@ describe("refused uploads leave nothing behind and the server keeps serving", ()
     const before = await snapshot();
     await ask(tomasz, [{ data: await smallWebp(), filename: "a.webp" }]).expect(404);
     await expectNothingSavedAndServing(before);
+  });
+
+  it("no unexpected server errors were logged", () => {
+    expect(ctx.errors).toEqual([]);
+  });
+});
+
+describe("polyglots: a photo that also carries script or markup is refused, nothing is kept, the server keeps serving", () => {
+  const carriesCode = {
+    code: "image_contains_code",
+    message: "This file carries more than a photo (it contains script or web-page code), so it can't be uploaded. Please send the photo straight from your camera or gallery.",
+  };
+
+  async function expectRefusedAsPolyglot(upload: Upload) {
+    const before = await snapshot();
+    const res = await ask(ruth, [upload]).expect(415);
+    expect(res.headers["content-type"]).toMatch(/^application\/json/);
+    expect(res.body).toEqual({ error: carriesCode });
+    await expectNothingSavedAndServing(before);
+  }
+
+  it("a JPEG with <script> in a comment segment → 415 image_contains_code", async () => {
+    await expectRefusedAsPolyglot({ data: withJpegComment(await smallJpeg(), "<script>alert(document.cookie)</script>"), filename: "lawn.jpg" });
+  });
+
+  it("a JPEG with <script> after the end-of-image marker → 415", async () => {
+    await expectRefusedAsPolyglot({ data: withAppended(await smallJpeg(), "<script>alert(1)</script>"), filename: "lawn.jpg" });
+  });
+
+  it("a JPEG with <?php … ?> appended → 415", async () => {
+    await expectRefusedAsPolyglot({ data: withAppended(await smallJpeg(), '<?php system($_GET["c"]); ?>'), filename: "lawn.jpg" });
+  });
+
+  it("a PNG with an <iframe> in a text chunk → 415", async () => {
+    await expectRefusedAsPolyglot({ data: withPngText(await smallPng(), "Comment", '<iframe src="https://evil.example/">'), filename: "lawn.png", contentType: "image/png" });
+  });
+
+  it("a JPEG whose bytes are also JavaScript (ÿØÿþ/*…*/=alert(1)) → 415", async () => {
+    await expectRefusedAsPolyglot({ data: await jpegScriptPolyglot(), filename: "lawn.jpg" });
+  });
+
+  it("a GIF whose bytes are also JavaScript (GIF89a/*…*/=alert(1)//) → 415, refused already as a GIF", async () => {
+    const before = await snapshot();
+    const res = await ask(ruth, [{ data: await gifScriptPolyglot(), filename: "lawn.jpg" }]).expect(415);
+    expect(res.body.error.code).toBe("unsupported_type");
+    await expectNothingSavedAndServing(before);
+  });
+
+  it("a good photo and a polyglot together → nothing from the batch is kept, nor the question", async () => {
+    const before = await snapshot();
+    const res = await ask(ruth, [
+      { data: await smallJpeg(), filename: "good.jpg" },
+      { data: await smallWebp(), filename: "good.webp", contentType: "image/webp" },
+      { data: withAppended(await smallJpeg(), "<?php echo 1;"), filename: "bad.jpg" },
+    ]).expect(415);
+    expect(res.body.error.code).toBe("image_contains_code");
+    await expectNothingSavedAndServing(before);
+  });
+
+  it("after the refusals, an ordinary photo is stored as usual", async () => {
+    const before = await snapshot();
+    const res = await ask(ruth, [{ data: await smallJpeg(), filename: "lawn.jpg" }], "And this one?").expect(201);
+    expect(res.body.message.photos).toHaveLength(1);
+    expect(await photoRowCount()).toBe(before.photoRows + 1);
+    expect((await filesUnder(photoDir)).length).toBe(before.files + 2);
+  });
+
+  it("a JPEG with an XMP packet, and motion photos with video after the end marker, are accepted", async () => {
+    const res = await ask(ruth, [
+      { data: await jpegWithXmp(), filename: "PXL_0001.jpg" },
+      { data: await pixelMotionPhoto(), filename: "PXL_0002.MP.jpg" },
+      { data: await samsungMotionPhoto(), filename: "20260412_101500.jpg" },
+    ]).expect(201);
+    expect(res.body.message.photos).toHaveLength(3);
+    for (const photo of res.body.message.photos) {
+      const large = await ruth.get(photo.url).buffer(true).expect(200);
+      const body = large.body as Buffer;
+      expect((await sharp(body).metadata()).xmp).toBeUndefined();
+      expect(body.includes("ftypmp42")).toBe(false);
+    }
   });
 
   it("no unexpected server errors were logged", () => {

@@ -18,7 +18,7 @@ interface QuestionValues {
 }
 
 /** Server refusals that are about the photos; shown beside them, not above the form. */
-const photoErrorCodes = new Set(["unsupported_type", "file_too_large", "too_many_files", "invalid_image", "invalid_upload"]);
+const photoErrorCodes = new Set(["unsupported_type", "file_too_large", "too_many_files", "invalid_image", "invalid_upload", "image_too_large", "image_contains_code"]);
 
 export interface QuestionFormProps {
   planId: number;
