@@ -142,6 +142,34 @@ export async function manyDueReminders(db: Db, customers: number, days: number, 
   return { ids, phones };
 }
 
+/**
+ * `customers` customers with both a mobile number and an e-mail address × `days` plan days, one due
+ * daily summary per day on each channel: customers × days × 2 reminders in all.
+ */
+export async function manyDueRemindersOnBothChannels(
+  db: Db,
+  customers: number,
+  days: number,
+  zone: string,
+  today: string,
+): Promise<{ smsIds: number[]; emailIds: number[]; customerIds: number[]; phones: string[]; emails: string[] }> {
+  const out = { smsIds: [] as number[], emailIds: [] as number[], customerIds: [] as number[], phones: [] as string[], emails: [] as string[] };
+  for (let i = 0; i < customers; i++) {
+    const dates = Array.from({ length: days }, (_, d) => addDaysIso(today, d - Math.floor(days / 2)));
+    const c = await createCustomerWithPlan(db, { timeZone: zone, steps: dates.map((date) => ({ date, kind: "mow" })) });
+    out.customerIds.push(c.customerId);
+    out.phones.push(c.phone!);
+    out.emails.push(c.email!);
+    for (const channel of ["sms", "email"] as const) {
+      const rows = await db("reminders")
+        .insert(dates.map((date) => ({ customer_id: c.customerId, plan_id: c.planId, kind: "daily_summary", local_date: date, local_time: "08:00", time_zone: zone, channel, due_at: db.fn.now(), next_attempt_at: db.fn.now() })))
+        .returning<{ id: string }[]>("id");
+      (channel === "sms" ? out.smsIds : out.emailIds).push(...rows.map((r) => Number(r.id)));
+    }
+  }
+  return out;
+}
+
 function addDaysIso(date: string, days: number): string {
   const d = new Date(`${date}T00:00:00Z`);
   d.setUTCDate(d.getUTCDate() + days);
@@ -156,6 +184,20 @@ export function sendsPerText(messages: { to: string; body: string; direction: st
     if (m.direction !== "outbound-api" || !wanted.has(m.to)) continue;
     const key = `${m.to}|${m.body}`;
     counts.set(key, (counts.get(key) ?? 0) + 1);
+  }
+  return counts;
+}
+
+/** E-mails received at the SMTP fake per (envelope recipient, Message-ID), for recipients in `emails` only. */
+export function receivedPerMessage(messages: { envelopeTo: string[]; messageId: string | null }[], emails: string[]): Map<string, number> {
+  const wanted = new Set(emails);
+  const counts = new Map<string, number>();
+  for (const m of messages) {
+    for (const to of m.envelopeTo) {
+      if (!wanted.has(to)) continue;
+      const key = `${to}|${m.messageId}`;
+      counts.set(key, (counts.get(key) ?? 0) + 1);
+    }
   }
   return counts;
 }
