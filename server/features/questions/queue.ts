@@ -40,36 +40,22 @@ export function planDayOn(phases: readonly PhaseRange[], visitDate: string, toda
   };
 }
 
-/**
- * Open questions of a company in one query: those with no staff answer after them first,
- * then oldest waiting first. The open ones are found through the partial index on open
- * questions; photos, the latest answer and the assignee come from lateral subqueries,
- * one index lookup each. Overdue is decided in SQL against the company's answer target.
- */
-/** Unanswered first (no staff answer after the question), then the oldest waiting. */
-const queueOrder = "(last_answer.created_at is not null and last_answer.created_at > messages.created_at), messages.created_at, messages.id";
+/** Unanswered first (no staff answer after the question), then the longest waiting. */
+const queueOrder = "(messages.answered_at is not null), messages.created_at, messages.id";
 
+/**
+ * Open questions of a company in two steps: first the page in queue order, straight off the
+ * queue index (company and answered-or-not are kept on the question for this), then everything
+ * shown for those 200: the plan's phases, the photos, the assignee and the thread's latest
+ * answer, one index lookup each. Overdue is decided in SQL against the company's answer target.
+ */
 export async function openQuestions(db: Db, companyId: number, now: Date = new Date()): Promise<OpenQuestion[]> {
-  // Two steps: first the page of open questions in queue order (only what the order needs),
-  // then everything shown for those 200. Fetching the plan's phases or counting photos for
-  // every open question before the limit made the queue slow at thousands of open questions.
   const page = db("messages")
-    .join("conversations", "conversations.id", "messages.conversation_id")
-    .join("care_plans", "care_plans.id", "conversations.plan_id")
-    .join("properties", "properties.id", "care_plans.property_id")
-    .join("customers", "customers.id", "properties.customer_id")
-    .joinRaw(
-      `left join lateral (
-         select answer.created_at from messages as answer
-         where answer.conversation_id = messages.conversation_id and answer.kind = 'answer'
-         order by answer.created_at desc limit 1
-       ) as last_answer on true`,
-    )
-    .where({ "messages.kind": "question", "customers.company_id": companyId })
+    .where({ "messages.kind": "question", "messages.company_id": companyId })
     .whereNull("messages.resolved_at")
     .orderByRaw(queueOrder)
     .limit(QUEUE_LIMIT)
-    .select(db.raw(`messages.id as page_id, last_answer.created_at as last_answered_at, row_number() over (order by ${queueOrder}) as page_order`));
+    .select(db.raw(`messages.id as page_id, row_number() over (order by ${queueOrder}) as page_order`));
   const rows = await db
     .with("page", page)
     .from("page")
@@ -83,6 +69,13 @@ export async function openQuestions(db: Db, companyId: number, now: Date = new D
     .leftJoin("users as assignee", "assignee.id", "messages.assigned_to")
     .joinRaw(
       `left join lateral (
+         select answer.created_at from messages as answer
+         where answer.conversation_id = messages.conversation_id and answer.kind = 'answer'
+         order by answer.created_at desc limit 1
+       ) as last_answer on true`,
+    )
+    .joinRaw(
+      `left join lateral (
          select count(*) as photo_count, min(photos.id) filter (where photos.position = 0) as first_photo_id
          from photos where photos.message_id = messages.id
        ) as photo on true`,
@@ -94,7 +87,7 @@ export async function openQuestions(db: Db, companyId: number, now: Date = new D
       db.raw("care_plans.figures -> 'meta' -> 'phases' as phases"),
       "messages.text", "messages.created_at", "messages.assigned_to", "assignee.name as assigned_to_name",
       db.raw("messages.created_at + make_interval(hours => companies.answer_target_hours) < now() as overdue"),
-      "photo.photo_count", "photo.first_photo_id", "page.last_answered_at",
+      "photo.photo_count", "photo.first_photo_id", "last_answer.created_at as last_answered_at",
     );
   return rows.map((r) => {
     const today = localDateAt(r.time_zone, now);
