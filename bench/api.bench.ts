@@ -1,7 +1,8 @@
 /**
  * API under load at the size of a busy company (50,000 homeowners, 3 million plan steps):
  * the homeowner's "today" request and the technician's question queue, signed in, against a
- * bare Express "hello" route in the same server process, with autocannon on loopback.
+ * bare Express "hello" route in the same server process (ahead of all the app's middleware),
+ * with autocannon on loopback.
  * Also prints EXPLAIN summaries of the hot queries at that size.
  */
 import autocannon from "autocannon";
@@ -13,7 +14,7 @@ import { createDb } from "../server/db.ts";
 import { startFakes, fakeDefaults } from "../server/fakes/index.ts";
 import { fakeOAuthAccounts } from "../scripts/lib/stack.ts";
 import { benchSize, generateBenchData } from "./api/generate-data.ts";
-import { homeownerCookie, staffCookie } from "./api/sign-in.ts";
+import { homeownerCookie, sessionIdOf, staffCookie } from "./api/sign-in.ts";
 import { explainSummary } from "./api/explain.ts";
 
 const repoRoot = resolve(import.meta.dirname, "..");
@@ -54,7 +55,9 @@ const stepCount = Number((await db("plan_steps").count<{ count: string }[]>("* a
 console.log(`data: ${benchSize.customers} homeowners, ${stepCount} plan steps${generationSeconds ? `, generated in ${generationSeconds.toFixed(0)} s` : ""}`);
 
 const fakes = await startFakes({ oauth: { accounts: fakeOAuthAccounts } });
-const server = spawn(process.execPath, ["--import", "tsx", "bench/api/server.ts"], {
+// BENCH_PROFILE_DIR=/some/dir writes a CPU profile of the server under load there, to see where the time goes.
+const profile = process.env.BENCH_PROFILE_DIR ? ["--cpu-prof", `--cpu-prof-dir=${process.env.BENCH_PROFILE_DIR}`] : [];
+const server = spawn(process.execPath, ["--import", "tsx", ...profile, "bench/api/server.ts"], {
   cwd: repoRoot,
   stdio: ["ignore", "pipe", "inherit"],
   env: {
@@ -95,7 +98,8 @@ try {
   const today = await load("homeowner today", `/api/plans/${planId}/today`, homeowner);
   const queue = queueOk ? await load("technician question queue", queuePath, technician) : null;
 
-  const explains = await explainSummary(db, { planId, companyId: company!.id });
+  const customer = await db("care_plans").join("properties", "properties.id", "care_plans.property_id").where("care_plans.id", planId).first<{ customer_id: number }>("properties.customer_id");
+  const explains = await explainSummary(db, { planId, companyId: company!.id, customerId: customer!.customer_id, sessionId: sessionIdOf(homeowner) });
   for (const e of explains) console.log(`EXPLAIN ${e.name}: ${e.summary}`);
 
   const ratio = (x: number) => Number((x / hello.requestsPerSecond).toFixed(2));

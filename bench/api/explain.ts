@@ -1,7 +1,16 @@
-/** EXPLAIN (ANALYZE) of the hot queries, summarised as the plan nodes and the indexes they use. */
+/**
+ * EXPLAIN (ANALYZE) of the hot queries, summarised as the plan nodes and the indexes they use.
+ * The statements are the app's own, captured as its code runs them, so the summary cannot drift
+ * from what the server really asks.
+ */
 import type { Knex } from "knex";
+import { loadToday } from "../../server/features/plans/today-repo.ts";
+import { plansOfCustomer } from "../../server/features/plans/plans-repo.ts";
+import { openQuestions } from "../../server/features/questions/queue.ts";
+import { sessionWithUser } from "../../server/auth/session-store.ts";
 
 type PlanNode = { "Node Type": string; "Index Name"?: string; "Relation Name"?: string; Plans?: PlanNode[] };
+type Statement = { sql: string; bindings: unknown[] };
 
 function walk(node: PlanNode, out: string[]) {
   const target = node["Index Name"] ?? node["Relation Name"];
@@ -9,7 +18,20 @@ function walk(node: PlanNode, out: string[]) {
   for (const child of node.Plans ?? []) walk(child, out);
 }
 
-async function explain(db: Knex, sql: string, bindings: unknown[]) {
+/** Runs `work` and returns the statements it sent through knex, with knex's placeholders. */
+async function captured(db: Knex, work: () => Promise<unknown>): Promise<Statement[]> {
+  const statements: Statement[] = [];
+  const listener = (q: { sql: string; bindings?: unknown[] }) => statements.push({ sql: q.sql.replace(/\$\d+/g, "?"), bindings: q.bindings ?? [] });
+  db.on("query", listener);
+  try {
+    await work();
+  } finally {
+    db.off("query", listener);
+  }
+  return statements;
+}
+
+async function explain(db: Knex, { sql, bindings }: Statement) {
   const result = await db.raw(`explain (analyze, format json) ${sql}`, bindings as Knex.RawBinding[]);
   const root = result.rows[0]["QUERY PLAN"][0];
   const nodes: string[] = [];
@@ -17,18 +39,22 @@ async function explain(db: Knex, sql: string, bindings: unknown[]) {
   return { executionMs: Number(root["Execution Time"].toFixed(2)), nodes, seqScans: nodes.filter((n) => n.startsWith("Seq Scan")) };
 }
 
-export async function explainSummary(db: Knex, ids: { planId: number; companyId: number }) {
-  const queries = [
-    { name: "plan steps of a plan", sql: "select * from plan_steps where plan_id = ? order by date, id", bindings: [ids.planId] },
-    { name: "plan progress (lateral count)", sql: "select count(*) filter (where state = 'done') from plan_steps where plan_id = ?", bindings: [ids.planId] },
-    { name: "plans of a customer", sql: "select cp.id from care_plans cp join properties p on p.id = cp.property_id where p.customer_id = (select customer_id from properties where id = (select property_id from care_plans where id = ?))", bindings: [ids.planId] },
-    { name: "open questions of a company", sql: "select m.id from messages m join conversations c on c.id = m.conversation_id join care_plans cp on cp.id = c.plan_id join properties p on p.id = cp.property_id join customers cu on cu.id = p.customer_id where m.kind = 'question' and m.resolved_at is null and cu.company_id = ? order by m.created_at limit 100", bindings: [ids.companyId] },
+export async function explainSummary(db: Knex, ids: { planId: number; companyId: number; customerId: number; sessionId: string }) {
+  const session: Statement = { sql: sessionWithUser.text.replace("$1", "?"), bindings: [ids.sessionId] };
+  const hot: { name: string; statements: () => Promise<Statement[]> }[] = [
+    { name: "session with its user (every signed-in request)", statements: async () => [session] },
+    { name: "homeowner today", statements: () => captured(db, () => loadToday(db, ids.planId, new Date())) },
+    { name: "plans of a customer", statements: () => captured(db, () => plansOfCustomer(db, ids.customerId)) },
+    { name: "technician question queue", statements: () => captured(db, () => openQuestions(db, ids.companyId)) },
   ];
   const out = [];
-  for (const q of queries) {
+  for (const q of hot) {
     try {
-      const e = await explain(db, q.sql, q.bindings);
-      out.push({ name: q.name, ...e, summary: `${e.executionMs} ms; ${e.nodes.join(" → ")}` });
+      for (const [i, statement] of (await q.statements()).entries()) {
+        const e = await explain(db, statement);
+        const name = i === 0 ? q.name : `${q.name} (${i + 1})`;
+        out.push({ name, ...e, summary: `${e.executionMs} ms; ${e.nodes.join(" → ")}` });
+      }
     } catch (err) {
       out.push({ name: q.name, executionMs: null, nodes: [], seqScans: [], summary: `not measured: ${(err as Error).message.split("\n")[0]}` });
     }

@@ -68,6 +68,14 @@ export async function generateBenchData(db: Knex, companyId: number): Promise<vo
          join properties p on p.id = cp.property_id join customers c on c.id = p.customer_id
          where c.external_ref like 'B-%'`,
       );
+      // A third of them already have a staff answer after them but are still open: the queue puts those last.
+      await db.raw(
+        `insert into messages (conversation_id, kind, author_user_id, text, created_at)
+         select q.conversation_id, 'answer', (select id from users where role = 'technician' order by id limit 1), 'Water it a bit longer.', q.created_at + interval '30 minutes'
+         from messages q join conversations cv on cv.id = q.conversation_id
+         join care_plans cp on cp.id = cv.plan_id join properties p on p.id = cp.property_id join customers c on c.id = p.customer_id
+         where q.kind = 'question' and c.external_ref like 'B-%' and cv.id % 3 = 0`,
+      );
     }
   }
   await db.raw("analyze");

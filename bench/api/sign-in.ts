@@ -31,3 +31,9 @@ export async function staffCookie(appUrl: string, fakes: RunningFakes, email: st
   if (done.headers.get("location") !== "/staff/") throw new Error(`staff sign-in ended at ${done.headers.get("location")}`);
   return done.headers.get("set-cookie")!.split(";")[0]!;
 }
+
+/** The session id inside a signed session cookie ("name=s:<id>.<signature>", URL-encoded). */
+export function sessionIdOf(cookie: string): string {
+  const value = decodeURIComponent(cookie.slice(cookie.indexOf("=") + 1));
+  return value.slice(2, value.lastIndexOf("."));
+}

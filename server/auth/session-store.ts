@@ -18,7 +18,7 @@ const userOfRequest = new WeakMap<Request, SessionUser | null>();
  * session must read as signed out, not fail the query. Prepared by name, since every
  * signed-in request runs it.
  */
-const sessionWithUser = {
+export const sessionWithUser = {
   name: "session-with-active-user",
   text: `
     select s.sess, u.id, u.company_id, u.role, u.name, u.email, u.phone, u.active, c.id as customer_id
