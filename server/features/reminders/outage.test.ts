@@ -6,13 +6,12 @@
  *    test database and the in-process fakes, with both fakes down, then both back. Counted at the fakes.
  * 2. Pure: with the production defaults, a 60 s outage cannot use up a reminder's attempts.
  */
-import { spawn, type ChildProcess } from "node:child_process";
-import { resolve } from "node:path";
 import fc from "fast-check";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { createTestContext, type TestContext } from "../../test/harness.ts";
 import { localDateAt } from "../../lib/local-date.ts";
 import { loadReminderSettings, retryDelayMs, type ReminderSettings } from "./settings.ts";
+import { exited, workerProcesses } from "./testing/worker-process.ts";
 import { daytimeZone, eventually, manyDueRemindersOnBothChannels, receivedPerMessage, sendsPerText, stateCounts } from "./testing/fixtures.ts";
 
 const ONE_MINUTE_MS = 60_000;
@@ -88,44 +87,26 @@ const FAILED_ATTEMPTS_AT_LEAST = 3;
 const CUSTOMERS = 12;
 const DAYS = 4;
 
-const repoRoot = resolve(import.meta.dirname, "../../..");
-
 type WaitingRow = { id: string; channel: string; state: string; attempts: number; last_error: string | null };
 
 describe("the worker process through an outage of both providers", () => {
   let ctx: TestContext;
-  const children: ChildProcess[] = [];
+  const workers = workerProcesses(() => ctx);
 
   beforeAll(async () => {
     ctx = await createTestContext();
   });
   afterAll(async () => {
-    for (const child of children) {
-      if (child.exitCode !== null || child.signalCode !== null) continue;
-      try {
-        process.kill(-child.pid!, "SIGKILL");
-      } catch {
-        // already gone
-      }
-    }
+    workers.killAll();
     if (!ctx) return;
     ctx.fakes.sms.setFaults({ down: false });
     ctx.fakes.smtp.setDown(false);
     await ctx.close();
   });
 
-  function startWorker(output: string[]): ChildProcess {
-    const child = spawn(resolve(repoRoot, "node_modules/.bin/tsx"), ["server/worker.ts"], {
-      cwd: repoRoot,
-      env: {
-        ...process.env,
-        NODE_ENV: "test",
-        DATABASE_URL: ctx.config.DATABASE_URL,
-        SESSION_SECRET: ctx.config.SESSION_SECRET,
-        PUBLIC_URL: ctx.config.PUBLIC_URL,
-        TWILIO_API_BASE_URL: ctx.fakes.smsUrl,
-        SMTP_HOST: ctx.fakes.smtpHost,
-        SMTP_PORT: String(ctx.fakes.smtpPort),
+  const startWorker = (output: string[]) =>
+    workers.start(
+      {
         REMINDER_POLL_MS: "100",
         REMINDER_CONCURRENCY: String(production.REMINDER_CONCURRENCY),
         REMINDER_LEASE_SECONDS: String(production.REMINDER_LEASE_SECONDS),
@@ -134,22 +115,9 @@ describe("the worker process through an outage of both providers", () => {
         REMINDER_MAX_ATTEMPTS: String(scaled.REMINDER_MAX_ATTEMPTS),
         REMINDER_IN_DOUBT_SETTLE_MS: String(production.REMINDER_IN_DOUBT_SETTLE_MS),
         REMINDER_SMS_TIMEOUT_MS: String(production.REMINDER_SMS_TIMEOUT_MS),
-        REMINDER_STATUS_CALLBACKS: "false",
-        // These rows are not what the plans would schedule; a refresh would rightly cancel them.
-        REMINDER_REFRESH_CRON: "off",
-        REMINDER_REFRESH_ON_START: "false",
       },
-      stdio: ["ignore", "pipe", "pipe"],
-      // Its own process group: tsx runs the script in a child node process, and a kill must reach that one too.
-      detached: true,
-    });
-    child.stdout!.on("data", (d: Buffer) => output.push(d.toString()));
-    child.stderr!.on("data", (d: Buffer) => output.push(d.toString()));
-    children.push(child);
-    return child;
-  }
-
-  const exited = (child: ChildProcess) => new Promise<void>((r) => (child.exitCode !== null || child.signalCode !== null ? r() : child.once("exit", () => r())));
+      output,
+    );
 
   it("holds every SMS and e-mail while both fakes are down, then sends each exactly once (counted at the fakes)", async ({ annotate }) => {
     const annotations: string[] = [];

@@ -1,64 +1,25 @@
-import { spawn, type ChildProcess } from "node:child_process";
-import { resolve } from "node:path";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { createTestContext, type TestContext } from "../../test/harness.ts";
 import { localDateAt } from "../../lib/local-date.ts";
 import { daytimeZone, eventually, manyDueReminders, sendsPerText, stateCounts } from "./testing/fixtures.ts";
+import { exited, signalWorker as signal, workerProcesses } from "./testing/worker-process.ts";
 
-const repoRoot = resolve(import.meta.dirname, "../../..");
 let ctx: TestContext;
-const children: ChildProcess[] = [];
+const workers = workerProcesses(() => ctx);
 
 beforeAll(async () => {
   ctx = await createTestContext();
 });
 afterAll(async () => {
-  for (const child of children) {
-    try {
-      process.kill(-child.pid!, "SIGKILL");
-    } catch {
-      // already gone
-    }
-  }
+  workers.killAll();
   await ctx.close();
 });
 
-/** The real worker process (`tsx server/worker.ts`) against the test database and the in-process fakes. */
-function startWorker(output: string[]): ChildProcess {
-  const child = spawn(resolve(repoRoot, "node_modules/.bin/tsx"), ["server/worker.ts"], {
-    cwd: repoRoot,
-    env: {
-      ...process.env,
-      NODE_ENV: "test",
-      DATABASE_URL: ctx.config.DATABASE_URL,
-      SESSION_SECRET: ctx.config.SESSION_SECRET,
-      PUBLIC_URL: ctx.config.PUBLIC_URL,
-      TWILIO_API_BASE_URL: ctx.fakes.smsUrl,
-      SMTP_HOST: ctx.fakes.smtpHost,
-      SMTP_PORT: String(ctx.fakes.smtpPort),
-      REMINDER_POLL_MS: "100",
-      REMINDER_CONCURRENCY: "10",
-      REMINDER_LEASE_SECONDS: "2",
-      REMINDER_RETRY_BASE_MS: "50",
-      REMINDER_IN_DOUBT_SETTLE_MS: "300",
-      REMINDER_STATUS_CALLBACKS: "false",
-      // This test's rows are not what the plans would schedule; a refresh would rightly cancel them.
-      REMINDER_REFRESH_CRON: "off",
-      REMINDER_REFRESH_ON_START: "false",
-    },
-    stdio: ["ignore", "pipe", "pipe"],
-    // Its own process group: tsx runs the script in a child node process, and a SIGKILL must reach that one too.
-    detached: true,
-  });
-  child.stdout!.on("data", (d: Buffer) => output.push(d.toString()));
-  child.stderr!.on("data", (d: Buffer) => output.push(d.toString()));
-  children.push(child);
-  return child;
-}
-
-/** Signals the whole group (tsx and the node process running the worker), as a crash or `kill` of the service would. */
-const signal = (child: ChildProcess, name: NodeJS.Signals) => process.kill(-child.pid!, name);
-const exited = (child: ChildProcess) => new Promise<void>((r) => (child.exitCode !== null || child.signalCode !== null ? r() : child.once("exit", () => r())));
+const startWorker = (output: string[]) =>
+  workers.start(
+    { REMINDER_POLL_MS: "100", REMINDER_CONCURRENCY: "10", REMINDER_LEASE_SECONDS: "2", REMINDER_RETRY_BASE_MS: "50", REMINDER_IN_DOUBT_SETTLE_MS: "300" },
+    output,
+  );
 
 describe("the worker process", () => {
   it("killed mid-batch and started again, loses no reminder and sends none twice (counted at the fake)", async () => {
