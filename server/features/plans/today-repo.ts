@@ -45,6 +45,8 @@ export async function loadToday(db: Db, planId: number, now: Date): Promise<Toda
       ),
     )
     .where("care_plans.id", planId)
+    // Prepared once per connection: planning this join costs more than running it.
+    .options({ name: "plan-today" })
     .first<(Omit<TodayRow, "steps"> & { steps: StepJson[] }) | undefined>();
   if (!row) return undefined;
   // JSON carries the step's timestamp as text; the rest of the code expects the Date a column gives.

@@ -55,11 +55,10 @@ export async function openQuestions(db: Db, companyId: number, now: Date = new D
     .whereNull("messages.resolved_at")
     .orderByRaw(queueOrder)
     .limit(QUEUE_LIMIT)
-    .select(db.raw(`messages.id as page_id, row_number() over (order by ${queueOrder}) as page_order`));
+    .select("id", "conversation_id", "text", "created_at", "assigned_to", db.raw(`row_number() over (order by ${queueOrder}) as page_order`));
   const rows = await db
     .with("page", page)
-    .from("page")
-    .join("messages", "messages.id", "page.page_id")
+    .from({ messages: "page" })
     .join("conversations", "conversations.id", "messages.conversation_id")
     .join("care_plans", "care_plans.id", "conversations.plan_id")
     .join("service_visits", "service_visits.id", "care_plans.visit_id")
@@ -80,7 +79,7 @@ export async function openQuestions(db: Db, companyId: number, now: Date = new D
          from photos where photos.message_id = messages.id
        ) as photo on true`,
     )
-    .orderBy("page.page_order")
+    .orderBy("messages.page_order")
     .select<QueueRow[]>(
       "messages.id", "care_plans.id as plan_id", "customers.first_name", "customers.last_name", "properties.street",
       "properties.time_zone", "service_visits.services", db.raw("to_char(service_visits.visit_date, 'YYYY-MM-DD') as visit_date"),
