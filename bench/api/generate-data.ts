@@ -1,6 +1,7 @@
 /**
  * Fills a bench database to the size of a busy company: 50,000 homeowners, each with a lawn,
- * a seeding visit and a care plan of 60 steps (3 million steps), plus open questions.
+ * a seeding visit and a care plan of 60 steps (3 million steps), a session each, plus open
+ * questions with a photo each, a third of them answered.
  * Done in SQL with generate_series; the plan content is one real engine plan repeated.
  */
 import type { Knex } from "knex";
@@ -77,6 +78,22 @@ export async function generateBenchData(db: Knex, companyId: number): Promise<vo
          where q.kind = 'question' and c.external_ref like 'B-%' and cv.id % 3 = 0`,
       );
     }
+  }
+  // Every homeowner signed in once, so the session read runs against a sessions table of real size.
+  await db.raw(
+    `insert into sessions (sid, sess, expire)
+     select 'bench-' || u.id || '-' || md5(u.id::text),
+            json_build_object('cookie', json_build_object('originalMaxAge', 2592000000, 'httpOnly', true, 'path', '/', 'sameSite', 'lax'), 'passport', json_build_object('user', u.id)),
+            now() + interval '30 days'
+     from users u where u.email like 'bench-%'`,
+  );
+  // …and every question carries a photo, so the queue's photo look-up has rows to find.
+  if (await db.schema.hasTable("photos")) {
+    await db.raw(
+      `insert into photos (message_id, position, large_key, thumb_key, width, height, bytes, thumb_bytes, sha256)
+       select m.id, 0, 'bench/' || m.id || '-large', 'bench/' || m.id || '-thumb', 2048, 1536, 400000, 30000, md5(m.id::text)
+       from messages m where m.kind = 'question'`,
+    );
   }
   await db.raw("analyze");
 }
