@@ -1,6 +1,6 @@
 import { StrictMode } from "react";
 import { createRoot } from "react-dom/client";
-import "../../shared/ui/theme.css";
+import "./portal.css";
 import { Providers } from "./app/providers.tsx";
 import { i18nReady } from "./i18n/index.ts";
 

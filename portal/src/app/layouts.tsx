@@ -3,11 +3,12 @@ import { useTranslation } from "react-i18next";
 import { Navigate, Outlet, useLocation, useNavigation } from "react-router-dom";
 import type { CurrentUser } from "#shared/schemas/auth";
 import { LoadingState, Page, buttonClasses, useMe } from "#shared/ui/index";
-import { useQuery } from "@tanstack/react-query";
+import { useQuery, useQueryClient } from "@tanstack/react-query";
 import { preferencesQueryOptions } from "../common/api/get-preferences.ts";
 import { PortalSignOutButton } from "../common/components/sign-out-button.tsx";
 import { applyLanguage } from "../i18n/index.ts";
 import { setUnits } from "../common/lib/units.ts";
+import { whenSettled } from "../common/lib/when-idle.ts";
 import { PortalShell } from "./portal-shell.tsx";
 
 /** Sign-in pages: no navigation and no account controls. */
@@ -47,22 +48,20 @@ function useSavedDisplayChoices(enabled: boolean) {
 }
 
 /**
- * The reading screens (Plan, Messages) are fetched once the phone is idle, so they still
- * open after the signal drops in the garden. Ask and Settings need a connection anyway.
+ * The reading screens (Plan, Messages) are fetched once the first screen's requests are done
+ * and the phone is idle, so they still open after the signal drops in the garden without
+ * slowing down the first screen. Ask and Settings need a connection anyway.
  */
 function usePrefetchReadingScreens() {
-  useEffect(() => {
-    const load = () => {
-      void import("../features/plan/plan-route.tsx");
-      void import("../features/messages/messages-route.tsx");
-    };
-    if (typeof requestIdleCallback === "function") {
-      const id = requestIdleCallback(load, { timeout: 5000 });
-      return () => cancelIdleCallback(id);
-    }
-    const timer = setTimeout(load, 2000);
-    return () => clearTimeout(timer);
-  }, []);
+  const queryClient = useQueryClient();
+  useEffect(
+    () =>
+      whenSettled(queryClient, () => {
+        void import("../features/plan/plan-route.tsx");
+        void import("../features/messages/messages-route.tsx");
+      }),
+    [queryClient],
+  );
 }
 
 /** Lazy screens load on first visit; a thin bar says something is happening meanwhile. */

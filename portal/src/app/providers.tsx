@@ -1,26 +1,18 @@
 import { PersistQueryClientProvider } from "@tanstack/react-query-persist-client";
-import { useEffect, useState } from "react";
 import { RouterProvider } from "react-router-dom";
-import { createQueryClient } from "#shared/ui/index";
-import { dropSavedCopyOnSignOut, keepQueriesForOffline, persistOptions } from "../common/api/offline-cache.ts";
+import { persistOptions } from "../common/api/offline-cache.ts";
+import { queryClient } from "./query-client.ts";
 import { router } from "./router.tsx";
 
-function createPortalQueryClient() {
-  const queryClient = createQueryClient();
-  keepQueriesForOffline(queryClient);
-  return queryClient;
-}
-
 export function Providers() {
-  const [queryClient] = useState(createPortalQueryClient);
-  useEffect(() => dropSavedCopyOnSignOut(queryClient), [queryClient]);
   return (
     <PersistQueryClientProvider
       client={queryClient}
       persistOptions={persistOptions}
       // A saved copy may predate the last change (a reload right after ticking a step):
-      // show it at once, but always ask the server again.
-      onSuccess={() => void queryClient.invalidateQueries()}
+      // show it at once, but always ask the server again. Requests the loaders started
+      // before the restore already do, so they are kept rather than cancelled and repeated.
+      onSuccess={() => void queryClient.invalidateQueries(undefined, { cancelRefetch: false })}
     >
       <RouterProvider router={router} />
     </PersistQueryClientProvider>

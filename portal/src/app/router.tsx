@@ -1,13 +1,17 @@
 import { createBrowserRouter } from "react-router-dom";
 import { NotFoundPage, RequireSignIn, RouteErrorPage } from "#shared/ui/index";
-import { TodayRoute } from "../features/today/today-route.tsx";
 import { VerifyRoute } from "../features/sign-in/verify-route.tsx";
+import { todayLoader } from "../features/today/today-loader.ts";
 import { PortalLoading, PublicLayout, SettingsAlias, SignedInLayout, StaffOnPortal } from "./layouts.tsx";
+import { signedInLoader } from "./loaders.ts";
 import { productLabel } from "./product.ts";
+import { queryClient } from "./query-client.ts";
 
 // Paths are relative to /portal: the server serves this app there.
-// Today is in the first download; every other screen (image processing, print styles,
-// forms and their validation library) loads when first opened, keeping the first load small on a phone.
+// Every screen is its own route module, loaded when first opened (image processing, print styles,
+// forms and their validation library stay out of the first load on a phone). The loaders are in
+// the first download: they start the screen's requests while its code is still on its way.
+// The sign-in link's landing page stays in the first download: it has no request to overlap with.
 export const router = createBrowserRouter(
   [
     {
@@ -23,11 +27,12 @@ export const router = createBrowserRouter(
         },
         {
           element: <SignedInLayout />,
+          loader: signedInLoader,
           children: [
             {
               element: <RequireSignIn signInPath="/sign-in" allowedRoles={["customer"]} wrongRole={(user) => <StaffOnPortal user={user} />} />,
               children: [
-                { index: true, element: <TodayRoute /> },
+                { index: true, loader: todayLoader(queryClient), lazy: () => import("../features/today/today-route.tsx").then((m) => ({ Component: m.TodayRoute })) },
                 { path: "plan", lazy: () => import("../features/plan/plan-route.tsx").then((m) => ({ Component: m.PlanRoute })) },
                 { path: "plan/:planId", lazy: () => import("../features/plan/plan-route.tsx").then((m) => ({ Component: m.PlanRoute })) },
                 { path: "ask", lazy: () => import("../features/ask/ask-route.tsx").then((m) => ({ Component: m.AskRoute })) },

@@ -42,6 +42,14 @@ export function defaultPlan(plans: readonly PlanHeader[]): PlanHeader | undefine
 }
 
 /**
+ * The plan to show: the one asked for, else the newest active one. Outside React (a route
+ * loader fetching ahead) `wanted` defaults to the choice remembered on this device.
+ */
+export function selectPlan(plans: readonly PlanHeader[], wanted: number | null = choice): PlanHeader | undefined {
+  return plans.find((p) => p.id === wanted) ?? defaultPlan(plans);
+}
+
+/**
  * The plans of the signed-in homeowner and the one to show. `overrideId` (from a
  * /plan/:planId address) wins over the remembered choice.
  */
@@ -49,7 +57,6 @@ export function useSelectedPlan(overrideId?: number) {
   const plansQuery = useMyPlans();
   const remembered = useSyncExternalStore(subscribe, () => choice, () => null);
   const plans = plansQuery.data ?? [];
-  const wanted = overrideId ?? remembered;
-  const selected = plans.find((p) => p.id === wanted) ?? defaultPlan(plans);
+  const selected = selectPlan(plans, overrideId ?? remembered);
   return { plansQuery, plans, selected };
 }

@@ -15,19 +15,34 @@ function dateLocale(language: string): string {
   return language.startsWith("es") ? "es-US" : "en-GB";
 }
 
+/**
+ * Making an Intl.DateTimeFormat costs far more than using one, and a screen formats dozens of
+ * dates (the whole plan, hundreds): each locale and style is made once and kept.
+ */
+const formatters = new Map<string, Intl.DateTimeFormat>();
+function formatter(locale: string, options: Intl.DateTimeFormatOptions): Intl.DateTimeFormat {
+  const key = `${locale}|${JSON.stringify(options)}`;
+  let made = formatters.get(key);
+  if (!made) {
+    made = new Intl.DateTimeFormat(locale, options);
+    formatters.set(key, made);
+  }
+  return made;
+}
+
 /** "3 Nov" */
 export function formatShortDate(iso: IsoDate, language: string): string {
-  return new Intl.DateTimeFormat(dateLocale(language), { day: "numeric", month: "short", timeZone: "UTC" }).format(utcDate(iso));
+  return formatter(dateLocale(language), { day: "numeric", month: "short", timeZone: "UTC" }).format(utcDate(iso));
 }
 
 /** "Tue 3 Nov" */
 export function formatDayWithWeekday(iso: IsoDate, language: string): string {
-  return new Intl.DateTimeFormat(dateLocale(language), { weekday: "short", day: "numeric", month: "short", timeZone: "UTC" }).format(utcDate(iso));
+  return formatter(dateLocale(language), { weekday: "short", day: "numeric", month: "short", timeZone: "UTC" }).format(utcDate(iso));
 }
 
 /** "Tuesday 3 November" */
 export function formatLongDate(iso: IsoDate, language: string): string {
-  return new Intl.DateTimeFormat(dateLocale(language), { weekday: "long", day: "numeric", month: "long", timeZone: "UTC" }).format(utcDate(iso));
+  return formatter(dateLocale(language), { weekday: "long", day: "numeric", month: "long", timeZone: "UTC" }).format(utcDate(iso));
 }
 
 /** Whole days from `from` to `to` (negative when `to` is earlier). */
@@ -37,7 +52,7 @@ export function daysBetween(from: IsoDate, to: IsoDate): number {
 
 /** Today's date on the lawn, in its own time zone (en-CA formats as YYYY-MM-DD). */
 export function localDateIn(timeZone: string, now = new Date()): IsoDate {
-  return new Intl.DateTimeFormat("en-CA", { timeZone, year: "numeric", month: "2-digit", day: "2-digit" }).format(now);
+  return formatter("en-CA", { timeZone, year: "numeric", month: "2-digit", day: "2-digit" }).format(now);
 }
 
 /**
@@ -52,10 +67,10 @@ export function formatClock(hhmm: string, language: string): string {
     return minutes === 0 ? `${hour12} ${suffix}` : `${hour12}:${String(minutes).padStart(2, "0")} ${suffix}`;
   }
   const at = new Date(Date.UTC(2000, 0, 1, hours, minutes));
-  return new Intl.DateTimeFormat("es-US", { hour: "numeric", minute: minutes === 0 ? undefined : "2-digit", timeZone: "UTC" }).format(at);
+  return formatter("es-US", { hour: "numeric", minute: minutes === 0 ? undefined : "2-digit", timeZone: "UTC" }).format(at);
 }
 
 /** A moment ("2026-12-01T14:05:00Z") as local clock and date for "saved at …" lines. */
 export function formatMoment(timestamp: number | string, language: string): string {
-  return new Intl.DateTimeFormat(language.startsWith("es") ? "es-US" : "en-US", { dateStyle: "medium", timeStyle: "short" }).format(new Date(timestamp));
+  return formatter(language.startsWith("es") ? "es-US" : "en-US", { dateStyle: "medium", timeStyle: "short" }).format(new Date(timestamp));
 }

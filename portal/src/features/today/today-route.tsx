@@ -13,6 +13,7 @@ import { QueryFallback } from "../../common/components/query-fallback.tsx";
 import { Section } from "../../common/components/section.tsx";
 import { choosePlan, useSelectedPlan } from "../../common/hooks/use-selected-plan.ts";
 import { daysBetween, formatLongDate, localDateIn } from "../../common/lib/dates.ts";
+import { whenSettled } from "../../common/lib/when-idle.ts";
 import { useToday } from "./api/get-today.ts";
 import { NextMilestone } from "./components/next-milestone.tsx";
 import { NoPlanYet } from "./components/no-plan-yet.tsx";
@@ -73,11 +74,14 @@ function TodayForPlan({ plan, plans }: { plan: PlanHeader; plans: PlanHeader[] }
   );
 }
 
-/** Once today is on screen, fetch the whole plan too, so it can be read later without a signal. */
+/**
+ * Once today is on screen, fetch the whole plan too, so it can be read later without a signal.
+ * It waits until the screen's own requests are done and the phone is idle: it is for later.
+ */
 function usePrefetchWholePlan(planId: number, ready: boolean) {
   const queryClient = useQueryClient();
   useEffect(() => {
-    if (ready) void queryClient.prefetchQuery(planQueryOptions(planId));
+    if (ready) return whenSettled(queryClient, () => void queryClient.prefetchQuery(planQueryOptions(planId)));
   }, [queryClient, planId, ready]);
 }
 
