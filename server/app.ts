@@ -1,4 +1,5 @@
 import express, { type Express } from "express";
+import compression from "compression";
 import type { Config } from "./config.ts";
 import type { Db } from "./db.ts";
 import type { Messenger } from "./messaging/messenger.ts";
@@ -36,6 +37,9 @@ export async function createApp(deps: AppDeps, web: WebMode = "none"): Promise<B
   app.disable("x-powered-by");
   app.set("trust proxy", config.TRUST_PROXY);
   app.use(securityHeaders(config.NODE_ENV === "development"));
+  // Phones on a slow connection: the apps' scripts and the larger answers (the question queue)
+  // shrink to a fifth. Only for clients that ask for it; images are left alone.
+  app.use(compression());
   app.use(requireSameOrigin(config.PUBLIC_URL));
   app.use(express.json({ limit: "100kb" }));
   app.use(express.urlencoded({ extended: false, limit: "100kb" }));
