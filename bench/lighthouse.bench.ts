@@ -5,6 +5,7 @@
  */
 import lighthouse from "lighthouse";
 import * as chromeLauncher from "chrome-launcher";
+import compression from "compression";
 import express from "express";
 import { createServer } from "node:http";
 import { mkdtempSync } from "node:fs";
@@ -25,7 +26,8 @@ const stack = await startStack({ nodeEnv: "test", ports, database: "sproutline_b
 
 const baselineOut = mkdtempSync(join(tmpdir(), "sproutline-lh-baseline-"));
 await build({ root: resolve(repoRoot, "bench/baseline-app"), configFile: false, logLevel: "warn", plugins: [react()], build: { outDir: baselineOut, emptyOutDir: true } });
-const baselineApp = express().use(express.static(baselineOut));
+// Served compressed, as the product is, so both are scored under the same conditions.
+const baselineApp = express().use(compression()).use(express.static(baselineOut));
 const baselineServer = createServer(baselineApp).listen(5799, "127.0.0.1");
 
 const chrome = await chromeLauncher.launch({
