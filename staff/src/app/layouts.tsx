@@ -1,6 +1,6 @@
-import { Link, Outlet } from "react-router-dom";
+import { Link, Outlet, useNavigation } from "react-router-dom";
 import { staffRoles, type CurrentUser } from "#shared/schemas/auth";
-import { AppShell, Page, RequireRole, SignOutButton, buttonClasses, useMe, type NavItem } from "#shared/ui/index";
+import { AppShell, LoadingState, Page, RequireRole, SignOutButton, buttonClasses, useMe, type NavItem } from "#shared/ui/index";
 import { useOutboxAvailable } from "../features/outbox/api/get-outbox.ts";
 import { productLabel } from "./product.ts";
 
@@ -53,9 +53,26 @@ export function StaffLayout() {
         ) : undefined
       }
     >
+      <NavigationProgress />
       <Outlet />
     </AppShell>
   );
+}
+
+/** Screens load on first visit; a thin bar says something is happening meanwhile. */
+function NavigationProgress() {
+  const navigation = useNavigation();
+  if (navigation.state === "idle") return null;
+  return (
+    <div role="status" className="fixed inset-x-0 top-0 z-50 h-1 animate-pulse bg-pine-700">
+      <span className="sr-only">Loading…</span>
+    </div>
+  );
+}
+
+/** Shown while the first screen of a visit downloads. */
+export function StaffLoading() {
+  return <LoadingState label="Loading…" />;
 }
 
 /** A homeowner who opened the staff app: point them to the portal. */

@@ -1,60 +1,75 @@
 import { createBrowserRouter } from "react-router-dom";
 import { staffRoles } from "#shared/schemas/auth";
 import { LoadingState, NotFoundPage, RequireSignIn, RouteErrorPage } from "#shared/ui/index";
-import { HomeRoute } from "../features/home/home-route.tsx";
-import { OutboxRoute } from "../features/outbox/outbox-route.tsx";
-import { PlanPreviewRoute } from "../features/plan-preview/plan-preview-route.tsx";
-import { SignInRoute } from "../features/sign-in/sign-in-route.tsx";
-import { AuditLogRoute } from "../features/audit-log/audit-log-route.tsx";
-import { FollowUpsRoute } from "../features/follow-ups/follow-ups-route.tsx";
-import { ProgramsRoute } from "../features/programs/programs-route.tsx";
-import { TeamRoute } from "../features/team/team-route.tsx";
-import { VisitImportRoute } from "../features/visit-import/visit-import-route.tsx";
-import { QuestionQueueRoute } from "../features/question-queue/question-queue-route.tsx";
-import { QuestionDetailRoute } from "../features/question-detail/question-detail-route.tsx";
-import { VisitLogRoute } from "../features/visit-log/visit-log-route.tsx";
-import { CustomersRoute } from "../features/customers/customers-route.tsx";
-import { CustomerRoute } from "../features/customers/customer-route.tsx";
-import { CustomerOnStaff, ManagersOnly, PublicLayout, StaffLayout } from "./layouts.tsx";
+import { questionDetailLoader } from "../features/question-detail/question-detail-loader.ts";
+import { questionQueueLoader } from "../features/question-queue/question-queue-loader.ts";
+import { CustomerOnStaff, ManagersOnly, PublicLayout, StaffLayout, StaffLoading } from "./layouts.tsx";
+import { signedInLoader } from "./loaders.ts";
 import { productLabel } from "./product.ts";
+import { queryClient } from "./query-client.ts";
 
 // Paths are relative to /staff: the server serves this app there.
+// Every screen is its own route module, loaded when first opened: tables, CSV parsing, charts,
+// forms and their validation stay out of the first load on a technician's phone. The loaders
+// are in the first download: they start the sign-in check and the screen's requests together,
+// while its code is still on its way. While the first screen downloads, the header is already
+// drawn and the page says it is loading.
 export const router = createBrowserRouter(
   [
     {
       errorElement: <RouteErrorPage productLabel={productLabel} />,
+      hydrateFallbackElement: <StaffLoading />,
       children: [
-        { element: <PublicLayout />, children: [{ path: "sign-in", element: <SignInRoute /> }] },
+        {
+          element: <PublicLayout />,
+          children: [
+            {
+              path: "sign-in",
+              lazy: () => import("../features/sign-in/sign-in-route.tsx").then((m) => ({ Component: m.SignInRoute })),
+              hydrateFallbackElement: <StaffLoading />,
+            },
+          ],
+        },
         {
           element: <StaffLayout />,
           children: [
             {
               element: <RequireSignIn signInPath="/sign-in" allowedRoles={staffRoles} wrongRole={(user) => <CustomerOnStaff user={user} />} />,
+              loader: signedInLoader,
+              hydrateFallbackElement: <StaffLoading />,
               children: [
-                { index: true, element: <HomeRoute /> },
-                { path: "outbox", element: <OutboxRoute /> },
-                { path: "plan-preview", element: <PlanPreviewRoute /> },
+                { index: true, lazy: () => import("../features/home/home-route.tsx").then((m) => ({ Component: m.HomeRoute })) },
+                { path: "outbox", lazy: () => import("../features/outbox/outbox-route.tsx").then((m) => ({ Component: m.OutboxRoute })) },
+                { path: "plan-preview", lazy: () => import("../features/plan-preview/plan-preview-route.tsx").then((m) => ({ Component: m.PlanPreviewRoute })) },
                 // Technician screens (managers use them too).
-                { path: "questions", element: <QuestionQueueRoute /> },
-                { path: "questions/:planId", element: <QuestionDetailRoute /> },
-                { path: "visits/new", element: <VisitLogRoute /> },
-                { path: "customers", element: <CustomersRoute /> },
-                { path: "customers/:customerId", element: <CustomerRoute /> },
+                {
+                  path: "questions",
+                  loader: questionQueueLoader(queryClient),
+                  lazy: () => import("../features/question-queue/question-queue-route.tsx").then((m) => ({ Component: m.QuestionQueueRoute })),
+                },
+                {
+                  path: "questions/:planId",
+                  loader: questionDetailLoader(queryClient),
+                  lazy: () => import("../features/question-detail/question-detail-route.tsx").then((m) => ({ Component: m.QuestionDetailRoute })),
+                },
+                { path: "visits/new", lazy: () => import("../features/visit-log/visit-log-route.tsx").then((m) => ({ Component: m.VisitLogRoute })) },
+                { path: "customers", lazy: () => import("../features/customers/customers-route.tsx").then((m) => ({ Component: m.CustomersRoute })) },
+                { path: "customers/:customerId", lazy: () => import("../features/customers/customer-route.tsx").then((m) => ({ Component: m.CustomerRoute })) },
                 {
                   // Manager screens: hidden from technicians in the nav, and a plain "Managers only" page if opened directly.
                   element: <ManagersOnly />,
                   children: [
-                    { path: "follow-ups", element: <FollowUpsRoute /> },
+                    { path: "follow-ups", lazy: () => import("../features/follow-ups/follow-ups-route.tsx").then((m) => ({ Component: m.FollowUpsRoute })) },
                     {
                       path: "reports/callbacks",
-                      // Loaded on demand: the charts library is most of its weight and only managers open it.
-                      lazy: async () => ({ Component: (await import("../features/callback-report/callback-report-route.tsx")).CallbackReportRoute }),
+                      // The charts library is most of its weight and only managers open it.
+                      lazy: () => import("../features/callback-report/callback-report-route.tsx").then((m) => ({ Component: m.CallbackReportRoute })),
                       hydrateFallbackElement: <LoadingState label="Loading the callback report…" />,
                     },
-                    { path: "programs", element: <ProgramsRoute /> },
-                    { path: "team", element: <TeamRoute /> },
-                    { path: "import", element: <VisitImportRoute /> },
-                    { path: "audit", element: <AuditLogRoute /> },
+                    { path: "programs", lazy: () => import("../features/programs/programs-route.tsx").then((m) => ({ Component: m.ProgramsRoute })) },
+                    { path: "team", lazy: () => import("../features/team/team-route.tsx").then((m) => ({ Component: m.TeamRoute })) },
+                    { path: "import", lazy: () => import("../features/visit-import/visit-import-route.tsx").then((m) => ({ Component: m.VisitImportRoute })) },
+                    { path: "audit", lazy: () => import("../features/audit-log/audit-log-route.tsx").then((m) => ({ Component: m.AuditLogRoute })) },
                   ],
                 },
                 { path: "*", element: <NotFoundPage /> },

@@ -1,17 +1,23 @@
+import { Suspense, lazy } from "react";
 import { useSearchParams } from "react-router-dom";
 import { EmptyState, ErrorState, LoadingState, Page, useSignedInUser } from "#shared/ui/index";
 import { useOpenQuestions } from "./api/get-open-questions.ts";
 import { QueueCards } from "./components/queue-cards.tsx";
 import { QueueFilters } from "./components/queue-filters.tsx";
-import { QueueTable } from "./components/queue-table.tsx";
 import { QUEUE_FILTER_LABELS, buildRows, countByFilter, countByService, filterRows, isQueueFilter, type QueueFilter } from "./lib/queue-rows.ts";
 import { useNow } from "./lib/use-now.ts";
+import { useWideScreen } from "./lib/use-wide-screen.ts";
+
+// The sortable table (and its table library) is only fetched on screens wide enough to show it:
+// on a technician's phone the queue is a list of cards.
+const QueueTable = lazy(() => import("./components/queue-table.tsx").then((m) => ({ default: m.QueueTable })));
 
 /** The question queue: homeowners' open questions, unanswered ones first, oldest waiting at the top. */
 export function QuestionQueueRoute() {
   const user = useSignedInUser();
   const now = useNow();
   const questions = useOpenQuestions();
+  const wide = useWideScreen();
 
   const [params, setParams] = useSearchParams();
   const filterParam = params.get("show");
@@ -60,9 +66,13 @@ export function QuestionQueueRoute() {
             </EmptyState>
           ) : (
             <>
-              <div className="hidden md:block">
-                <QueueTable rows={shown} now={now} />
-              </div>
+              {wide && (
+                <div className="hidden md:block">
+                  <Suspense fallback={<LoadingState label="Loading questions…" />}>
+                    <QueueTable rows={shown} now={now} />
+                  </Suspense>
+                </div>
+              )}
               <div className="md:hidden">
                 <QueueCards rows={shown} now={now} />
               </div>
