@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import sharp from "sharp";
-import { codeMarkers, findEmbeddedCode, readsAsScript } from "./embedded-code.ts";
+import { codeMarkers, findEmbeddedCode, readsAsScript, scanWindow } from "./embedded-code.ts";
 import {
   gifScriptPolyglot, jpegScriptPolyglot, jpegWithGps, jpegWithXmp, pixelMotionPhoto, pseudoRandomBytes, samsungMotionPhoto,
   smallJpeg, smallPng, smallWebp, withAppended, withJpegComment, withPngText,
@@ -40,6 +40,26 @@ describe("finding markup or script in an uploaded photo", () => {
   it("says where the marker starts", async () => {
     const jpeg = await smallJpeg();
     expect(findEmbeddedCode(withAppended(jpeg, "<?php echo 1;"))).toEqual({ marker: "<?php", offset: jpeg.length });
+  });
+
+  it("reads a large file in windows without missing a marker across a window's edge, or misreading one", () => {
+    const edge = scanWindow.bytes;
+    const size = 4 * scanWindow.bytes;
+    // Wherever the script lands around the first window's end, it is found at its true offset.
+    for (const at of [edge - 2100, edge - scanWindow.overlapBytes, edge - 4, edge - 1, edge, edge + 3]) {
+      const bytes = pseudoRandomBytes(size, 7).fill(0x20, at - 8, at);
+      bytes.write("<script>", at, "latin1");
+      expect(findEmbeddedCode(bytes), `at ${at}`).toEqual({ marker: "<script", offset: at });
+    }
+    // A handler whose "=" comes after 1,000 spaces, across the edge.
+    const spaced = pseudoRandomBytes(size, 8);
+    spaced.write(`<img onerror${" ".repeat(1000)}=alert(1)>`, edge - 1500, "latin1");
+    expect(findEmbeddedCode(spaced)?.marker).toBe("on…= event handler");
+    // Part of a longer name just before the next window starts is still no handler.
+    const step = scanWindow.bytes - scanWindow.overlapBytes;
+    const named = pseudoRandomBytes(size, 9);
+    named.write("xmp:onload=1", step - 4, "latin1");
+    expect(findEmbeddedCode(named)).toBeUndefined();
   });
 
   it("accepts what real photos carry: XMP packets, EXIF, motion-photo video after the end marker", async () => {
