@@ -49,10 +49,19 @@ export function keepQueriesForOffline(queryClient: QueryClient) {
   queryClient.setDefaultOptions({ ...defaults, queries: { ...defaults.queries, gcTime: offlineMaxAgeMs } });
 }
 
-/** Forget this person's saved copy the moment they sign out (or their session ends). */
+/**
+ * Forgets this person's data on the device: the saved copy, and the answers still in memory,
+ * which the persister would otherwise write straight back on its next (throttled) save.
+ */
+function forgetSignedInData(queryClient: QueryClient) {
+  queryClient.removeQueries({ predicate: (query) => query.queryKey[0] !== meQueryKey[0] });
+  void queryPersister.removeClient();
+}
+
+/** …the moment they sign out, or their session ends (signed out elsewhere, expired). */
 export function dropSavedCopyOnSignOut(queryClient: QueryClient): () => void {
   return queryClient.getQueryCache().subscribe((event) => {
     if (event.type !== "updated" || event.query.queryKey[0] !== meQueryKey[0]) return;
-    if (event.query.state.status === "success" && event.query.state.data === null) void queryPersister.removeClient();
+    if (event.query.state.status === "success" && event.query.state.data === null) forgetSignedInData(queryClient);
   });
 }

@@ -1,9 +1,8 @@
 import { useTranslation } from "react-i18next";
 import { Button, useSignOut } from "#shared/ui/index";
 import { useErrorText } from "../lib/use-error-text.ts";
-import { queryPersister } from "../api/offline-cache.ts";
 
-/** Signs out and wipes the offline copy on this device, so the next person can't read it. */
+/** Signs out; the offline copy on this device goes with the session (`dropSavedCopyOnSignOut`). */
 export function PortalSignOutButton({ className = "" }: { className?: string }) {
   const { t } = useTranslation();
   const errorText = useErrorText();
@@ -12,7 +11,7 @@ export function PortalSignOutButton({ className = "" }: { className?: string }) 
     <span className={`inline-flex flex-col items-start gap-1 ${className}`}>
       <Button
         variant="secondary"
-        onClick={() => signOut.mutate(undefined, { onSuccess: () => void queryPersister.removeClient() })}
+        onClick={() => signOut.mutate()}
         pending={signOut.isPending}
         pendingLabel={t("account.signingOut")}
       >
