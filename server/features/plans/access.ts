@@ -11,6 +11,11 @@ export type PlanAccess = {
   timeZone: string;
 };
 
+/** Staff of the plan's company, or the customer who owns the lawn. */
+export function maySee(user: SessionUser, plan: { company_id: number; customer_id: number }): boolean {
+  return plan.company_id === user.companyId && (user.role !== "customer" || plan.customer_id === user.customerId);
+}
+
 /**
  * Finds a plan the signed-in person may see: staff of the same company, or the customer
  * who owns the lawn. Anything else is "not found", so plan ids don't leak.
@@ -29,7 +34,7 @@ export async function findPlanForUser(db: Db, user: SessionUser, planId: number)
       "customers.company_id",
       "properties.time_zone",
     );
-  if (!row || (user.role === "customer" && row.customer_id !== user.customerId)) throw notFound("That care plan");
+  if (!row || !maySee(user, row)) throw notFound("That care plan");
   return {
     planId: row.plan_id,
     propertyId: row.property_id,

@@ -52,10 +52,7 @@ export function planRoutes(deps: AppDeps, onChange?: PlanChangeHook): RouteSpec[
       access: everyone,
       audit: "plan.read",
       params: planIdParamsSchema,
-      handler: async ({ user, params }) => {
-        await findPlanForUser(db, user, params.planId);
-        return { plan: await loadStoredPlan(db, params.planId) };
-      },
+      handler: async ({ user, params }) => ({ plan: await loadStoredPlan(db, params.planId, user) }),
     }),
     route({
       method: "get",

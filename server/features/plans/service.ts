@@ -9,6 +9,7 @@ import { currentProgram, programVersion } from "./program-repo.ts";
 import * as plans from "./plans-repo.ts";
 import * as steps from "./steps-repo.ts";
 import { loadToday } from "./today-repo.ts";
+import { maySee } from "./access.ts";
 
 /** Runs after every change to a plan's steps, inside the same transaction (e.g. to reschedule reminders). */
 export type PlanChangeHook = (trx: Db, planId: number) => Promise<void>;
@@ -69,9 +70,10 @@ export async function regeneratePlan(db: Db, planId: number, change: { observati
   });
 }
 
-export async function loadStoredPlan(db: Db, planId: number): Promise<StoredPlan> {
+/** The whole plan; with `reader`, only if they may see it (checked on the row it loads anyway). */
+export async function loadStoredPlan(db: Db, planId: number, reader?: SessionUser): Promise<StoredPlan> {
   const row = await plans.loadPlanRow(db, planId);
-  if (!row) throw notFound("That care plan");
+  if (!row || (reader && !maySee(reader, row))) throw notFound("That care plan");
   const stepRows = await steps.stepsOfPlan(db, planId);
   const { meta, summary, cautions } = row.figures;
   return {
@@ -92,9 +94,7 @@ export async function loadStoredPlan(db: Db, planId: number): Promise<StoredPlan
  */
 export async function todayView(db: Db, user: SessionUser, planId: number, now = new Date()): Promise<TodayResponse> {
   const row = await loadToday(db, planId, now);
-  if (!row || row.company_id !== user.companyId || (user.role === "customer" && row.customer_id !== user.customerId)) {
-    throw notFound("That care plan");
-  }
+  if (!row || !maySee(user, row)) throw notFound("That care plan");
   const { today } = row;
   return {
     today,
