@@ -1,7 +1,7 @@
 import { use } from "react";
 import { useFormContext, useWatch } from "react-hook-form";
 import { SPECIES } from "#shared/engine/index";
-import { TextField, FieldError } from "#shared/ui/index";
+import { FieldError, SelectField, TextField } from "#shared/ui/index";
 import type { IrrigationKind, LawnCondition, PreviewFormValues } from "../lib/form-values.ts";
 import { FieldErrorsContext, fieldId } from "../lib/field-errors.ts";
 import { IRRIGATION_LABELS, LAWN_CONDITION_LABELS, speciesLabel } from "../lib/labels.ts";
@@ -9,8 +9,14 @@ import { daysAfter } from "../lib/local-dates.ts";
 import { Checkbox } from "./checkbox.tsx";
 import { CheckboxGroup } from "./checkbox-group.tsx";
 import { FormSection } from "./form-section.tsx";
-import { SelectField } from "./select-field.tsx";
 import { TimeZoneField } from "./time-zone-field.tsx";
+
+const seasonOptions = [
+  { value: "cool", label: "Cool-season" },
+  { value: "warm", label: "Warm-season" },
+];
+const conditionOptions = (Object.keys(LAWN_CONDITION_LABELS) as LawnCondition[]).map((value) => ({ value, label: LAWN_CONDITION_LABELS[value] }));
+const irrigationOptions = (Object.keys(IRRIGATION_LABELS) as IrrigationKind[]).map((value) => ({ value, label: IRRIGATION_LABELS[value] }));
 
 /** The lawn, its watering and its mower, and where it is. */
 export function PropertyFields() {
@@ -35,26 +41,17 @@ export function PropertyFields() {
           <Checkbox key={species} label={speciesLabel(species)} value={species} {...register("property.grassType.species")} />
         ))}
       </CheckboxGroup>
-      <SelectField id={fieldId("property.grassType.season")} label="Grass season" error={errors["property.grassType.season"]} {...register("property.grassType.season")}>
-        <option value="">Work it out from the species</option>
-        <option value="cool">Cool-season</option>
-        <option value="warm">Warm-season</option>
-      </SelectField>
-      <SelectField id={fieldId("property.lawnCondition")} label="Lawn condition" error={errors["property.lawnCondition"]} {...register("property.lawnCondition")}>
-        {(Object.keys(LAWN_CONDITION_LABELS) as LawnCondition[]).map((condition) => (
-          <option key={condition} value={condition}>
-            {LAWN_CONDITION_LABELS[condition]}
-          </option>
-        ))}
-      </SelectField>
+      <SelectField
+        id={fieldId("property.grassType.season")}
+        label="Grass season"
+        error={errors["property.grassType.season"]}
+        placeholderOption="Work it out from the species"
+        options={seasonOptions}
+        {...register("property.grassType.season")}
+      />
+      <SelectField id={fieldId("property.lawnCondition")} label="Lawn condition" error={errors["property.lawnCondition"]} options={conditionOptions} {...register("property.lawnCondition")} />
 
-      <SelectField id={fieldId("property.irrigation.kind")} label="Watering" error={errors["property.irrigation.kind"]} {...register("property.irrigation.kind")}>
-        {(Object.keys(IRRIGATION_LABELS) as IrrigationKind[]).map((kind) => (
-          <option key={kind} value={kind}>
-            {IRRIGATION_LABELS[kind]}
-          </option>
-        ))}
-      </SelectField>
+      <SelectField id={fieldId("property.irrigation.kind")} label="Watering" error={errors["property.irrigation.kind"]} options={irrigationOptions} {...register("property.irrigation.kind")} />
       {irrigationKind !== "none" && (
         <>
           <TextField

@@ -1,16 +1,16 @@
 import { use } from "react";
 import { useFieldArray, useFormContext, useWatch } from "react-hook-form";
 import { SEED_MIX_SUM_TOLERANCE, SPECIES } from "#shared/engine/index";
-import { Button, TextField, FieldError } from "#shared/ui/index";
+import { Button, FieldError, SelectField, TextField } from "#shared/ui/index";
 import { emptySeedRow, type PreviewFormValues } from "../lib/form-values.ts";
 import { FieldErrorsContext, fieldId } from "../lib/field-errors.ts";
 import { speciesLabel } from "../lib/labels.ts";
 import { formatFigure } from "../lib/numbers.ts";
 import { FormSection } from "./form-section.tsx";
-import { SelectField } from "./select-field.tsx";
 
 /** The engine accepts up to 9 species in a mix. */
 const MAX_SPECIES = 9;
+const speciesOptions = SPECIES.map((species) => ({ value: species, label: speciesLabel(species) }));
 
 /** The seed sown: one row per species from the bag's tag, and the rate. */
 export function SeedMixFields() {
@@ -32,14 +32,9 @@ export function SeedMixFields() {
             id={fieldId(`visit.seedMix.${i}.species`)}
             label="Species"
             error={errors[`visit.seedMix.${i}.species`]}
+            options={speciesOptions}
             {...register(`visit.seedMix.${i}.species`)}
-          >
-            {SPECIES.map((species) => (
-              <option key={species} value={species}>
-                {speciesLabel(species)}
-              </option>
-            ))}
-          </SelectField>
+          />
           <div className="grid grid-cols-1 gap-3 min-[400px]:grid-cols-3">
             <TextField
               id={fieldId(`visit.seedMix.${i}.percent`)}

@@ -1,9 +1,10 @@
 import { useFormContext, useWatch } from "react-hook-form";
-import { TextField } from "#shared/ui/index";
+import { SelectField, TextField } from "#shared/ui/index";
 import { OTHER_TIME_ZONE, type PreviewFormValues } from "../lib/form-values.ts";
 import { fieldId, useFieldError } from "../lib/field-errors.ts";
 import { COMMON_TIME_ZONES } from "../lib/labels.ts";
-import { SelectField } from "./select-field.tsx";
+
+const zoneOptions = [...COMMON_TIME_ZONES.map(({ zone, label }) => ({ value: zone, label })), { value: OTHER_TIME_ZONE, label: "Another zone (type it)" }];
 
 /** Common North American zones in a list, and a box for any other IANA zone. */
 export function TimeZoneField() {
@@ -19,15 +20,9 @@ export function TimeZoneField() {
         label="Time zone"
         hint="Watering times and dates are in the property's own zone."
         error={typed ? undefined : error}
+        options={zoneOptions}
         {...register("property.timeZone")}
-      >
-        {COMMON_TIME_ZONES.map(({ zone, label }) => (
-          <option key={zone} value={zone}>
-            {label}
-          </option>
-        ))}
-        <option value={OTHER_TIME_ZONE}>Another zone (type it)</option>
-      </SelectField>
+      />
       {typed && (
         <TextField
           id={fieldId("property.timeZone")}
