@@ -7,7 +7,7 @@ import type { Knex } from "knex";
 import { loadToday } from "../../server/features/plans/today-repo.ts";
 import { plansOfCustomer } from "../../server/features/plans/plans-repo.ts";
 import { openQuestions } from "../../server/features/questions/queue.ts";
-import { sessionWithUser } from "../../server/auth/session-store.ts";
+import { sessionsWithUsers } from "../../server/auth/session-store.ts";
 
 type PlanNode = { "Node Type": string; "Index Name"?: string; "Relation Name"?: string; Plans?: PlanNode[] };
 type Statement = { sql: string; bindings: unknown[] };
@@ -40,7 +40,8 @@ async function explain(db: Knex, { sql, bindings }: Statement) {
 }
 
 export async function explainSummary(db: Knex, ids: { planId: number; companyId: number; customerId: number; sessionId: string }) {
-  const session: Statement = { sql: sessionWithUser.text.replace("$1", "?"), bindings: [ids.sessionId] };
+  // The array as PostgreSQL's literal, since knex would spread a JavaScript array into a list.
+  const session: Statement = { sql: sessionsWithUsers.text.replace("$1", "?"), bindings: [`{${ids.sessionId}}`] };
   const hot: { name: string; statements: () => Promise<Statement[]> }[] = [
     { name: "session with its user (every signed-in request)", statements: async () => [session] },
     { name: "homeowner today", statements: () => captured(db, () => loadToday(db, ids.planId, new Date())) },

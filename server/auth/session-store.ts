@@ -4,6 +4,7 @@ import type connectPgSimple from "connect-pg-simple";
 import type pg from "pg";
 import { toSessionUser, type UserRow } from "./users-repo.ts";
 import type { SessionUser } from "./session-user.ts";
+import { batchedReads } from "../lib/batched-reads.ts";
 
 type PgStoreClass = ReturnType<typeof connectPgSimple>;
 type StoredSession = session.SessionData & { [userRead]?: SessionUser | null };
@@ -13,29 +14,46 @@ const userRead = Symbol("user read with the session");
 const userOfRequest = new WeakMap<Request, SessionUser | null>();
 
 /*
- * One round trip for "who is this": the session row and its signed-in, still active user.
- * The id in the session is checked to be a number before the cast, because a malformed
- * session must read as signed out, not fail the query. Prepared by name, since every
- * signed-in request runs it.
+ * "Who is this", for every session read at the same moment: each session row with its
+ * signed-in, still active user. The id in the session is checked to be a number before the
+ * cast, because a malformed session must read as signed out, not fail the query. Prepared by
+ * name, since every signed-in request runs it.
  */
-export const sessionWithUser = {
-  name: "session-with-active-user",
+export const sessionsWithUsers = {
+  name: "sessions-with-active-users",
   text: `
-    select s.sess, u.id, u.company_id, u.role, u.name, u.email, u.phone, u.active, c.id as customer_id
+    select s.sid, s.sess, u.id, u.company_id, u.role, u.name, u.email, u.phone, u.active, c.id as customer_id
     from sessions s
     left join users u on u.active and u.id = case when s.sess #>> '{passport,user}' ~ '^[0-9]{1,9}$' then (s.sess #>> '{passport,user}')::int end
     left join customers c on c.user_id = u.id
-    where s.sid = $1 and s.expire >= now()`,
+    where s.sid = any($1::text[]) and s.expire >= now()`,
 };
+
+type SessionRow = { sid: string; sess: StoredSession } & Partial<UserRow>;
 
 /**
  * The PostgreSQL session store (connect-pg-simple) with a read that also loads the signed-in
  * user, so passport need not ask the database again on every request.
  */
 export function sessionStoreWithUser(PgStore: PgStoreClass, pool: pg.Pool) {
+  // Shared by all requests: concurrent sign-in checks become one query (see batchedReads).
+  const sessionReads = batchedReads<string, SessionRow>(async (sids) => {
+    const { rows } = await pool.query<SessionRow>({ ...sessionsWithUsers, values: [[...new Set(sids)]] });
+    const bySid = new Map(rows.map((row) => [row.sid, row]));
+    // A session asked for twice in one batch (two tabs) gets a copy: each request changes its own.
+    const handedOut = new Set<string>();
+    return sids.map((sid) => {
+      const row = bySid.get(sid);
+      if (!row) return undefined;
+      if (handedOut.has(sid)) return { ...row, sess: structuredClone(row.sess) };
+      handedOut.add(sid);
+      return row;
+    });
+  });
+
   return class SessionStoreWithUser extends PgStore {
     override get(sid: string, done: (err: unknown, sess?: session.SessionData | null) => void): void {
-      pool.query<{ sess: StoredSession } & Partial<UserRow>>({ ...sessionWithUser, values: [sid] }).then(({ rows: [row] }) => {
+      sessionReads.load(sid).then((row) => {
         if (!row) return done(null, null);
         const sess = row.sess;
         sess[userRead] = row.id === null || row.id === undefined ? null : toSessionUser(row as UserRow);

@@ -158,6 +158,24 @@ describe("changing and recomputing a plan", () => {
     expect(view.plan).toEqual(expect.objectContaining({ id: planId, progress: expect.objectContaining({ skipped: 1 }) }));
   });
 
+  it("answers many Today requests at once, each with its own plan, and refuses a plan that is someone else's", async () => {
+    const ruthPlan = (await technician.post("/api/visits").send(visitBody()).expect(201)).body.planId as number;
+    const ruth = await signInCustomer(ctx, "ruth.okonkwo@mail.example");
+    const tomasz = await signInCustomer(ctx, "tomasz.brandt@mail.example");
+    const tomaszPlan = (await tomasz.get("/api/my/plans").expect(200)).body.plans[0].id as number;
+    const asked = Array.from({ length: 24 }, (_, i) =>
+      [
+        { agent: ruth, planId: ruthPlan, status: 200 },
+        { agent: tomasz, planId: tomaszPlan, status: 200 },
+        { agent: tomasz, planId: ruthPlan, status: 404 },
+      ][i % 3]!,
+    );
+    const answers = await Promise.all(asked.map(({ agent, planId }) => agent.get(`/api/plans/${planId}/today`)));
+    expect(answers.map((a) => a.status)).toEqual(asked.map((a) => a.status));
+    const answered = answers.flatMap((a, i) => (a.status === 200 ? [{ asked: asked[i]!.planId, got: a.body.plan.id }] : []));
+    expect(answered.map((a) => a.got)).toEqual(answered.map((a) => a.asked));
+  });
+
   it("regenerates idempotently and keeps what the homeowner did", async () => {
     const { planId } = (await technician.post("/api/visits").send(visitBody()).expect(201)).body;
     const first = (await stepRows(planId)).find((s) => s.date <= today())!;
