@@ -14,8 +14,19 @@ export async function generateBenchData(db: Knex, companyId: number): Promise<vo
   const parsed = parsePlanInput(overseedingVisit());
   if (!parsed.ok) throw new Error("fixture invalid");
   const plan = generatePlan(parsed.value);
-  const step = plan.steps.find((s) => s.kind === "water")!;
-  const content = JSON.stringify({ detail: step.detail, times: step.times, minutesPerCycle: step.minutesPerCycle, why: step.why, cautions: step.cautions });
+  // The fixture plan's own steps (its kinds, texts and spacing), repeated to make 60 a plan.
+  const dayOf = (date: string) => Date.parse(`${date}T00:00:00Z`) / 86_400_000;
+  const firstDay = dayOf(plan.steps[0]!.date);
+  const steps = JSON.stringify(
+    plan.steps.map((s, position) => ({
+      position,
+      day: dayOf(s.date) - firstDay,
+      phase: s.phase,
+      kind: s.kind,
+      title: s.title,
+      content: { detail: s.detail, times: s.times, minutesPerCycle: s.minutesPerCycle, why: s.why, cautions: s.cautions },
+    })),
+  );
   const figures = JSON.stringify({ summary: plan.summary, meta: plan.meta, cautions: plan.cautions });
   const { customers, stepsPerPlan } = benchSize;
 
@@ -47,11 +58,14 @@ export async function generateBenchData(db: Knex, companyId: number): Promise<vo
   );
   await db.raw(
     `insert into plan_steps (plan_id, key, date, phase, kind, title, content, state)
-     select cp.id, 'bench:' || g, v.visit_date + g, 'germination', 'water', ?, ?::jsonb,
+     select cp.id, 'bench:' || g, v.visit_date + s.day, s.phase, s.kind, s.title, s.content,
             (case when g < 5 then 'done' else 'pending' end)::plan_step_state
      from care_plans cp join service_visits v on v.id = cp.visit_id, generate_series(0, ? - 1) g
-     where v.import_key like 'bench:%'`,
-    [step.title, content, stepsPerPlan],
+     join json_to_recordset(?::json) as s(position int, day int, phase text, kind text, title text, content jsonb) on s.position = g % ?
+     where v.import_key like 'bench:%'
+     -- As the app writes them: a plan's steps together, so they share table pages.
+     order by cp.id, g`,
+    [stepsPerPlan, steps, plan.steps.length],
   );
   // Every 10th homeowner has asked a question, so the technician's queue has real depth.
   if (await db.schema.hasTable("messages")) {

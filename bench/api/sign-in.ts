@@ -1,4 +1,6 @@
 /** Signs people in over HTTP for load tests, returning session cookies. */
+import { createHmac } from "node:crypto";
+import type { Knex } from "knex";
 import type { RunningFakes } from "../../server/fakes/index.ts";
 
 export async function homeownerCookie(appUrl: string, fakes: RunningFakes, email: string): Promise<string> {
@@ -36,4 +38,27 @@ export async function staffCookie(appUrl: string, fakes: RunningFakes, email: st
 export function sessionIdOf(cookie: string): string {
   const value = decodeURIComponent(cookie.slice(cookie.indexOf("=") + 1));
   return value.slice(2, value.lastIndexOf("."));
+}
+
+/**
+ * Many signed-in homeowners at once, from the sessions the bench data holds (one per homeowner),
+ * with the cookie express-session would have set: "s:" + id + "." + HMAC-SHA256 of the id
+ * (base64, no padding), as cookie-signature makes it. Load spread over them reads as many
+ * homeowners do, each with a session and a plan of their own.
+ */
+export async function benchHomeowners(db: Knex, secret: string, count: number): Promise<{ cookie: string; planId: number }[]> {
+  // The generated sessions last 30 days from generation; data is reused across runs.
+  await db("sessions").where("sid", "like", "bench-%").update({ expire: db.raw("now() + interval '30 days'") });
+  const rows = await db("sessions as s")
+    .join("customers as c", "c.user_id", db.raw("(s.sess #>> '{passport,user}')::int"))
+    .join("properties as p", "p.customer_id", "c.id")
+    .join("care_plans as cp", "cp.property_id", "p.id")
+    .where("s.sid", "like", "bench-%")
+    .orderByRaw("md5(s.sid)")
+    .limit(count)
+    .select<{ sid: string; plan_id: number }[]>("s.sid", "cp.id as plan_id");
+  return rows.map(({ sid, plan_id }) => {
+    const signature = createHmac("sha256", secret).update(sid).digest("base64").replace(/=+$/, "");
+    return { cookie: `sproutline.sid=${encodeURIComponent(`s:${sid}.${signature}`)}`, planId: plan_id };
+  });
 }
