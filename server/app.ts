@@ -1,12 +1,13 @@
 import express, { type Express } from "express";
-import compression from "compression";
 import type { Config } from "./config.ts";
 import type { Db } from "./db.ts";
 import type { Messenger } from "./messaging/messenger.ts";
 import { createSessionMiddleware } from "./auth/sessions.ts";
 import { createPassport } from "./auth/passport.ts";
+import { userFromSession } from "./auth/request-user.ts";
 import { apiNotFound, errorHandler } from "./http/errors.ts";
 import { securityHeaders } from "./web/security-headers.ts";
+import { compressWherePays } from "./web/compress.ts";
 import { buildRouter } from "./http/route.ts";
 import { requireSameOrigin } from "./http/same-origin.ts";
 import { createRateLimit, limitSpecs } from "./http/rate-limits.ts";
@@ -37,9 +38,7 @@ export async function createApp(deps: AppDeps, web: WebMode = "none"): Promise<B
   app.disable("x-powered-by");
   app.set("trust proxy", config.TRUST_PROXY);
   app.use(securityHeaders(config.NODE_ENV === "development"));
-  // Phones on a slow connection: the apps' scripts and the larger answers (the question queue)
-  // shrink to a fifth. Only for clients that ask for it; images are left alone.
-  app.use(compression());
+  app.use(compressWherePays());
   app.use(requireSameOrigin(config.PUBLIC_URL));
   app.use(express.json({ limit: "100kb" }));
   app.use(express.urlencoded({ extended: false, limit: "100kb" }));
@@ -47,7 +46,9 @@ export async function createApp(deps: AppDeps, web: WebMode = "none"): Promise<B
   const sessions = createSessionMiddleware(config);
   const passport = createPassport(config, deps.db);
   app.use(sessions.middleware);
-  app.use(passport.session());
+  app.use(userFromSession(deps.db));
+  // passport's login and logout, only where people sign in and out (Google's routes get theirs from passport.authenticate).
+  app.use(["/api/auth/link/consume", "/api/auth/sign-out"], passport.initialize());
 
   app.use(["/api/auth/link", "/api/auth/link/consume"], createRateLimit(deps.db, limitSpecs.signIn));
   app.post("/api/plans/:planId/questions", createRateLimit(deps.db, limitSpecs.uploads));

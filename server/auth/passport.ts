@@ -2,11 +2,9 @@ import passport, { type PassportStatic } from "passport";
 import { Strategy as GoogleStrategy, type Profile } from "passport-google-oauth20";
 import type { Config } from "../config.ts";
 import type { Db } from "../db.ts";
-import { findActiveUserById, findUserByEmail, rememberGoogleSubject } from "./users-repo.ts";
+import { findUserByEmail, rememberGoogleSubject } from "./users-repo.ts";
 import { staffRoles } from "#shared/schemas/auth";
 import type { SessionUser } from "./session-user.ts";
-import { userReadWithSession } from "./session-store.ts";
-import type { Request } from "express";
 
 /** Why a Google sign-in was refused; the staff sign-in page explains each. */
 export type GoogleRefusal = "not_staff" | "deactivated" | "unverified";
@@ -19,12 +17,6 @@ export function createPassport(config: Config, db: Db): PassportStatic {
   const instance = new passport.Passport() as unknown as PassportStatic;
 
   instance.serializeUser<number>((user, done) => done(null, (user as SessionUser).id));
-  instance.deserializeUser<number>((req: Request, id: number, done: (err: unknown, user?: SessionUser | false) => void) => {
-    // An unknown or deactivated user simply has no session any more.
-    const read = userReadWithSession(req);
-    if (read !== undefined && (read === null || read.id === id)) return done(null, read ?? false);
-    findActiveUserById(db, id).then((user) => done(null, user ?? false), done);
-  });
 
   const fake = config.GOOGLE_AUTH_BASE_URL;
   instance.use(

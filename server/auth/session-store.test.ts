@@ -36,6 +36,20 @@ describe("the session read, which loads the signed-in user with it", () => {
     expect(answers.map((a) => a.body.user.email)).toEqual(asked.map((p) => p.email));
   });
 
+  it("forgets a deactivated user in the session, so reactivating the account does not revive an old session", async () => {
+    const ruth = await signInCustomer(ctx, "ruth.okonkwo@mail.example");
+    await ruth.get("/api/me").expect(200);
+    await ctx.db("users").where({ email: "ruth.okonkwo@mail.example" }).update({ active: false });
+    try {
+      await ruth.get("/api/me").expect(401);
+    } finally {
+      await ctx.db("users").where({ email: "ruth.okonkwo@mail.example" }).update({ active: true });
+    }
+    await ruth.get("/api/me").expect(401);
+    const again = await signInCustomer(ctx, "ruth.okonkwo@mail.example");
+    await again.get("/api/me").expect(200);
+  });
+
   it("keeps a homeowner's own customer record with the user", async () => {
     const ruth = await signInCustomer(ctx, "ruth.okonkwo@mail.example");
     const me = (await ruth.get("/api/me").expect(200)).body.user;

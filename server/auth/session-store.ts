@@ -33,7 +33,7 @@ type SessionRow = { sid: string; sess: StoredSession } & Partial<UserRow>;
 
 /**
  * The PostgreSQL session store (connect-pg-simple) with a read that also loads the signed-in
- * user, so passport need not ask the database again on every request.
+ * user, so finding the request's user (userFromSession) needs no query of its own.
  */
 export function sessionStoreWithUser(PgStore: PgStoreClass, pool: pg.Pool) {
   // Shared by all requests: concurrent sign-in checks become one query (see batchedReads).
