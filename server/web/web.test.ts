@@ -19,7 +19,7 @@ describe("headers on every answer", () => {
     expect(res.headers["x-content-type-options"]).toBe("nosniff");
   });
 
-  it("compresses a large answer for a client that accepts gzip, and only then", async () => {
+  it("compresses a large answer (a whole plan) for a client that accepts gzip, and only then", async () => {
     const ruth = await signInCustomer(ctx, "ruth.okonkwo@mail.example");
     const { plans } = (await ruth.get("/api/my/plans").expect(200)).body as { plans: { id: number }[] };
     const path = `/api/plans/${plans[0]!.id}`;
@@ -29,5 +29,14 @@ describe("headers on every answer", () => {
     const plain = await ruth.get(path).set("Accept-Encoding", "identity").expect(200);
     expect(plain.headers["content-encoding"]).toBeUndefined();
     expect(plain.body).toEqual(zipped.body);
+  });
+
+  it("sends a small answer (Today) as it is, even to a client that accepts gzip", async () => {
+    const ruth = await signInCustomer(ctx, "ruth.okonkwo@mail.example");
+    const { plans } = (await ruth.get("/api/my/plans").expect(200)).body as { plans: { id: number }[] };
+    const today = await ruth.get(`/api/plans/${plans[0]!.id}/today`).set("Accept-Encoding", "gzip").expect(200);
+    expect(today.headers["content-encoding"]).toBeUndefined();
+    expect(Number(today.headers["content-length"])).toBeGreaterThan(1024);
+    expect(Number(today.headers["content-length"])).toBeLessThan(14 * 1024);
   });
 });
