@@ -93,6 +93,8 @@ try {
   const queueOk = (await fetch(`${appUrl}${queuePath}`, { headers: { cookie: technician } })).status === 200;
 
   type Target = { path: string; cookie?: string };
+  // As a browser asks, so the server's compression decisions cost what they cost for real visitors.
+  const browserHeaders = { "accept-encoding": "gzip, deflate, br, zstd", accept: "application/json" };
   /** Each request goes to the next target in turn; the baseline goes through the same per-request set-up. */
   const load = async (name: string, targets: Target[], atOnce = connections) => {
     let turn = 0;
@@ -100,7 +102,7 @@ try {
       {
         setupRequest: (req: autocannon.Request) => {
           const { path, cookie } = targets[turn++ % targets.length]!;
-          return { ...req, path, headers: { ...req.headers, ...(cookie ? { cookie } : {}) } };
+          return { ...req, path, headers: { ...req.headers, ...browserHeaders, ...(cookie ? { cookie } : {}) } };
         },
       },
     ];
