@@ -26,7 +26,8 @@ export function nighttimeZone(now = new Date()): string {
   return offset === 0 ? "Etc/UTC" : offset > 0 ? `Etc/GMT-${offset}` : `Etc/GMT+${-offset}`;
 }
 
-let phoneCounter = randomInt(1_000_000, 8_000_000);
+// The exchange (the counter's first three digits) must start with 2–9 to be a valid NANP number.
+let phoneCounter = randomInt(2_000_000, 8_000_000);
 /** Unused E.164 numbers in a range the seed does not use; never ending 0000 or 1111 (the fake's special numbers). */
 export function freshPhone(): string {
   do phoneCounter += 1;
