@@ -46,7 +46,7 @@ export async function createApp(deps: AppDeps, web: WebMode = "none"): Promise<B
   const sessions = createSessionMiddleware(config);
   const passport = createPassport(config, deps.db);
   app.use(sessions.middleware);
-  app.use(userFromSession(deps.db));
+  app.use(userFromSession());
   // passport's login and logout, only where people sign in and out (Google's routes get theirs from passport.authenticate).
   app.use(["/api/auth/link/consume", "/api/auth/sign-out"], passport.initialize());
 

@@ -1,6 +1,4 @@
 import type { RequestHandler } from "express";
-import type { Db } from "../db.ts";
-import { findActiveUserById } from "./users-repo.ts";
 import { userReadWithSession } from "./session-store.ts";
 
 type PassportSession = { passport?: { user?: unknown } };
@@ -13,21 +11,15 @@ type PassportSession = { passport?: { user?: unknown } };
  * or deactivated forgets that user, as passport's would, so a later reactivation does not
  * revive it.
  */
-export function userFromSession(db: Db): RequestHandler {
+export function userFromSession(): RequestHandler {
   return (req, _res, next) => {
     const stored = (req.session as PassportSession | undefined)?.passport;
-    const id = stored?.user;
-    if (id === undefined) return next();
-    const read = userReadWithSession(req);
-    if (read !== undefined && (read === null || read.id === id)) return settle(read ?? undefined);
-    // Not read with the session (the store did not load it): ask once.
-    if (typeof id !== "number") return settle(undefined);
-    findActiveUserById(db, id).then(settle, next);
-
-    function settle(user: Express.User | undefined) {
-      if (user) req.user = user;
-      else delete stored!.user;
-      next();
+    if (stored?.user !== undefined) {
+      // Every session the store reads comes with its user: null when gone or deactivated.
+      const read = userReadWithSession(req);
+      if (read && read.id === stored.user) req.user = read;
+      else if (read === null) delete stored.user;
     }
+    next();
   };
 }
