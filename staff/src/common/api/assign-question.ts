@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { assignQuestionResponseSchema, type AssignQuestionResponse } from "#shared/schemas/question-queue";
 import { apiFetch } from "#shared/ui/index";
-import { openQuestionsQueryKey, type QueuedQuestion } from "./get-open-questions.ts";
+import { openQuestionsQueryKey, type QueuedQuestion } from "./open-questions.ts";
 
 export interface AssignInput {
   messageId: number;

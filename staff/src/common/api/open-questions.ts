@@ -23,6 +23,15 @@ export function openQuestionsQueryOptions() {
   });
 }
 
+/** The open question with this id (null once resolved), from the queue's own cache entry, so both screens show one assignee. */
+export function useOpenQuestion(messageId: number | undefined) {
+  return useQuery({
+    ...openQuestionsQueryOptions(),
+    enabled: messageId !== undefined,
+    select: (questions: QueuedQuestion[]) => questions.find((q) => q.messageId === messageId) ?? null,
+  });
+}
+
 /** Re-checked every half minute: homeowners ask while a technician has the queue open. */
 export function useOpenQuestions() {
   return useQuery({ ...openQuestionsQueryOptions(), refetchInterval: 30_000 });

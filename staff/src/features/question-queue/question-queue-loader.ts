@@ -1,5 +1,5 @@
 import type { QueryClient } from "@tanstack/react-query";
-import { openQuestionsQueryOptions } from "./api/get-open-questions.ts";
+import { openQuestionsQueryOptions } from "../../common/api/open-questions.ts";
 
 /**
  * Starts reading the queue together with the sign-in check, while the screen's code is still on

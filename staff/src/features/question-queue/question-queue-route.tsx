@@ -1,7 +1,7 @@
 import { Suspense, lazy } from "react";
 import { useSearchParams } from "react-router-dom";
 import { EmptyState, ErrorState, LoadingState, Page, useSignedInUser } from "#shared/ui/index";
-import { useOpenQuestions } from "./api/get-open-questions.ts";
+import { useOpenQuestions } from "../../common/api/open-questions.ts";
 import { QueueCards } from "./components/queue-cards.tsx";
 import { QueueFilters } from "./components/queue-filters.tsx";
 import { QUEUE_FILTER_LABELS, buildRows, countByFilter, countByService, filterRows, isQueueFilter, type QueueFilter } from "./lib/queue-rows.ts";

@@ -1,5 +1,6 @@
 import { Button, errorMessage, useSignedInUser } from "#shared/ui/index";
-import { useAssignQuestion, useOpenQuestion } from "../api/assign-question.ts";
+import { useAssignQuestion } from "../../../common/api/assign-question.ts";
+import { useOpenQuestion } from "../../../common/api/open-questions.ts";
 
 /** Who has the open question, with "Assign to me" or "Unassign"; nothing once it is resolved. */
 export function AssignQuestion({ messageId }: { messageId: number }) {

@@ -1,6 +1,6 @@
 import { Link } from "react-router-dom";
 import { errorMessage, useSignedInUser, waitingTime } from "#shared/ui/index";
-import { useAssignQuestion } from "../api/assign-question.ts";
+import { useAssignQuestion } from "../../../common/api/assign-question.ts";
 import type { QueueRow } from "../lib/queue-rows.ts";
 
 const askedFormat = new Intl.DateTimeFormat(undefined, { dateStyle: "medium", timeStyle: "short" });

@@ -1,5 +1,5 @@
 import type { QueuePlanDay } from "#shared/schemas/question-queue";
-import type { QueuedQuestion } from "../api/get-open-questions.ts";
+import type { QueuedQuestion } from "../../../common/api/open-questions.ts";
 
 export const QUEUE_FILTERS = ["all", "mine", "unassigned", "overdue"] as const;
 export type QueueFilter = (typeof QUEUE_FILTERS)[number];
