@@ -65,18 +65,13 @@ export function QuestionQueueRoute() {
               <p>Try another filter or any service type.</p>
             </EmptyState>
           ) : (
-            <>
-              {wide && (
-                <div className="hidden md:block">
-                  <Suspense fallback={<LoadingState label="Loading questions…" />}>
-                    <QueueTable rows={shown} now={now} />
-                  </Suspense>
-                </div>
-              )}
-              <div className="md:hidden">
-                <QueueCards rows={shown} now={now} />
-              </div>
-            </>
+            wide ? (
+              <Suspense fallback={<LoadingState label="Loading questions…" />}>
+                <QueueTable rows={shown} now={now} />
+              </Suspense>
+            ) : (
+              <QueueCards rows={shown} now={now} />
+            )
           )}
         </div>
       )}
