@@ -19,6 +19,8 @@ const envSchema = z
     SMTP_USER: z.string().optional(),
     SMTP_PASSWORD: z.string().optional(),
     EMAIL_FROM: z.string().default("Sproutline <plans@sproutline.example>"),
+    // Replies to customer e-mails go to reply+<token>@ this domain, whose mail the inbound SMTP listener receives.
+    INBOUND_EMAIL_DOMAIN: z.string().min(3).default("replies.sproutline.example"),
 
     TWILIO_ACCOUNT_SID: z.string().default("AC00000000000000000000000000000000"),
     TWILIO_AUTH_TOKEN: z.string().default("local-fake-auth-token"),

@@ -8,7 +8,8 @@ import { localMomentAt, zonedTimeToUtc } from "./schedule.ts";
  * so a changed plan, a changed preference or an opt-out all go through the same code.
  */
 
-export type ReminderKind = "daily_summary" | "watering_nudge";
+export const PLAN_REMINDER_KINDS = ["daily_summary", "watering_nudge"] as const;
+export type ReminderKind = (typeof PLAN_REMINDER_KINDS)[number];
 
 export type StepForReminders = { date: string; kind: string; state: "pending" | "done" | "skipped"; times?: readonly string[] };
 

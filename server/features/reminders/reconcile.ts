@@ -2,7 +2,7 @@ import type { Db } from "../../db.ts";
 import type { PlanChangeHook } from "../plans/service.ts";
 import { loadPreferences } from "../preferences/repo.ts";
 import { deliveryChannels, type Channel } from "./channels.ts";
-import { desiredReminders, type DesiredReminder, type StepForReminders } from "./plan-reminders.ts";
+import { desiredReminders, PLAN_REMINDER_KINDS, type DesiredReminder, type StepForReminders } from "./plan-reminders.ts";
 import { effectiveWindow } from "./quiet-hours.ts";
 import { localMomentAt } from "./schedule.ts";
 
@@ -109,8 +109,9 @@ async function storeDesired(db: Db, customerId: number, planId: number, timeZone
       insert.bindings,
     );
   }
-  // Everything still waiting that is no longer wanted is cancelled; fallbacks after a failure are not the plan's to cancel.
-  const cancel = db("reminders").where({ plan_id: planId, state: "scheduled" }).whereNull("fallback_for");
+  // Everything still waiting that is no longer wanted is cancelled; fallbacks after a failure are not the plan's to cancel,
+  // and notices (answers, visit changes) come from people's actions, not from the plan's calendar.
+  const cancel = db("reminders").where({ plan_id: planId, state: "scheduled" }).whereIn("kind", PLAN_REMINDER_KINDS).whereNull("fallback_for");
   if (desired.length > 0) {
     cancel.whereNotIn(
       ["kind", "local_date", "local_time", "channel"],

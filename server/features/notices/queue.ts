@@ -1,0 +1,102 @@
+import type { Db } from "../../db.ts";
+import { loadPreferences } from "../preferences/repo.ts";
+import { deliveryChannels, type Channel } from "../reminders/channels.ts";
+import { effectiveWindow, nextAllowedInstant } from "../reminders/quiet-hours.ts";
+import { localMomentAt } from "../reminders/schedule.ts";
+
+/*
+ * Notices are messages caused by someone's action (an answer, a visit booked or moved, a new plan)
+ * rather than by the plan's calendar. They ride on the reminders ledger, so they get its
+ * exactly-once sending, retries, fallbacks and outbox for free; their text is composed when a
+ * worker first claims them, from what is true then.
+ *
+ * Gathering: a notice waits NOTICE_GATHER_MINUTES before it is due, and a later event of the same
+ * kind (and, for visits, the same visit) joins a notice that is still waiting instead of queuing a
+ * second one, so three quick answers make one text, not a burst.
+ */
+export const NOTICE_KINDS = ["conversation_update", "visit_update", "welcome"] as const;
+export type NoticeKind = (typeof NOTICE_KINDS)[number];
+
+export const NOTICE_GATHER_MINUTES = 3;
+
+export type VisitChange = "booked" | "moved" | "cancelled" | "done";
+export type NoticeContext = { followUpId?: number; change?: VisitChange; viaSms?: boolean };
+
+type Recipient = { customer_id: number; time_zone: string; email: string | null; phone: string | null; window_start: string | null; window_end: string | null };
+
+async function recipientOfPlan(db: Db, planId: number): Promise<Recipient | undefined> {
+  return db("care_plans")
+    .join("properties", "properties.id", "care_plans.property_id")
+    .join("customers", "customers.id", "properties.customer_id")
+    .join("users", "users.id", "customers.user_id")
+    .join("companies", "companies.id", "customers.company_id")
+    .where({ "care_plans.id": planId, "care_plans.status": "active", "users.active": true })
+    .first<Recipient | undefined>(
+      "customers.id as customer_id",
+      "properties.time_zone",
+      "users.email",
+      "users.phone",
+      "companies.reminder_window_start as window_start",
+      "companies.reminder_window_end as window_end",
+    );
+}
+
+/** The customer's channels for notices; an answer to a texted question also goes back by text when texts are allowed. */
+export async function noticeChannels(db: Db, recipient: Recipient, context: NoticeContext): Promise<Channel[]> {
+  const contacts = { email: recipient.email, phone: recipient.phone };
+  const [preferences, optOuts] = await Promise.all([
+    loadPreferences(db, recipient.customer_id, contacts),
+    db("channel_opt_outs").where({ customer_id: recipient.customer_id }).pluck<Channel[]>("channel"),
+  ]);
+  const optedOut = new Set(optOuts);
+  const channels = deliveryChannels(preferences.channels, contacts, optedOut);
+  if (context.viaSms && contacts.phone && !optedOut.has("sms") && !channels.includes("sms")) channels.push("sms");
+  return channels;
+}
+
+/**
+ * Queues a notice for the plan's homeowner on each of their channels, due after the gathering
+ * delay and inside the hours they allow. Returns the channels a new row was queued on (none when
+ * the event joined a waiting notice, the plan is not active, or the customer takes no messages).
+ */
+export async function queueNotice(db: Db, notice: { planId: number; kind: NoticeKind; context?: NoticeContext; now?: Date }): Promise<Channel[]> {
+  const now = notice.now ?? new Date();
+  const context = notice.context ?? {};
+  const recipient = await recipientOfPlan(db, notice.planId);
+  if (!recipient) return [];
+  const channels = await noticeChannels(db, recipient, context);
+  const window = effectiveWindow({ start: recipient.window_start, end: recipient.window_end });
+  const dueAt = nextAllowedInstant(new Date(now.getTime() + NOTICE_GATHER_MINUTES * 60_000), recipient.time_zone, window);
+  const local = localMomentAt(dueAt, recipient.time_zone);
+  const queued: Channel[] = [];
+  for (const channel of channels) {
+    const waiting = db("reminders").where({ plan_id: notice.planId, kind: notice.kind, channel });
+    if (notice.kind === "welcome") {
+      // One welcome per plan, ever.
+      if (await waiting.first("id")) continue;
+    } else {
+      waiting.where({ state: "scheduled", attempts: 0 }).whereNull("body");
+      if (notice.kind === "visit_update") waiting.whereRaw("(context->>'followUpId')::int = ?", [context.followUpId ?? 0]);
+      const joined = await waiting.update({ context: JSON.stringify(context), updated_at: db.fn.now() });
+      if (joined > 0) continue;
+    }
+    const inserted = await db("reminders")
+      .insert({
+        customer_id: recipient.customer_id,
+        plan_id: notice.planId,
+        kind: notice.kind,
+        local_date: local.date,
+        local_time: local.time,
+        time_zone: recipient.time_zone,
+        channel,
+        due_at: dueAt,
+        next_attempt_at: dueAt,
+        context: JSON.stringify(context),
+      })
+      .onConflict(["plan_id", "kind", "local_date", "local_time", "channel"])
+      .ignore()
+      .returning("id");
+    if (inserted.length > 0) queued.push(channel);
+  }
+  return queued;
+}
