@@ -204,6 +204,40 @@ describe("inbound e-mail replies", () => {
     expect(ctx.errors).toEqual([]);
   });
 
+  it("reads an HTML-only reply and finds the token in the To header when the relay delivers to another mailbox", async () => {
+    const messageId = newMessageId();
+    const html = [
+      "<div dir=\"ltr\">Can the crew come <b>Thursday</b> instead?</div><br>",
+      "<div class=\"gmail_quote\"><div dir=\"ltr\" class=\"gmail_attr\">On Mon, Nov 30, 2026 at 4:02 PM Cobblefield Lawn &lt;",
+      `${address}&gt; wrote:<br></div>`,
+      "<blockquote class=\"gmail_quote\">Your follow-up visit is booked for Wednesday.</blockquote></div>",
+    ].join("");
+    await deliver({ from: RUTH, to: address, envelope: { from: RUTH, to: [`inbox@${domain}`] }, messageId, html });
+
+    const filed = (await emailMessages()).find((r) => r.external_id === messageId);
+    expect(filed).toMatchObject({ kind: "question", text: "Can the crew come Thursday instead?" });
+  });
+
+  it("refuses a message over the size limit with 552 and stores nothing", async () => {
+    const small = await startInboundSmtp(
+      { db: ctx.db, storage: photoStorageFromConfig(ctx.config), messenger: createMessenger(ctx.config), inboundDomain: domain, log: (_m, err) => ctx.errors.push(err) },
+      { host: "127.0.0.1", port: 0, maxBytes: 64 * 1024, onFiled: (o) => outcomes.push(o) },
+    );
+    try {
+      const before = (await emailMessages()).length;
+      const transport = nodemailer.createTransport({ host: "127.0.0.1", port: small.port, secure: false, ignoreTLS: true });
+      const error = await transport
+        .sendMail({ from: RUTH, to: address, subject: "Big", text: "Photo attached.", attachments: [{ filename: "big.png", content: Buffer.alloc(200 * 1024, 7) }] })
+        .then(() => null, (err: { responseCode?: number }) => err);
+      transport.close();
+      expect(error).toMatchObject({ responseCode: 552 });
+      expect((await emailMessages()).length).toBe(before);
+      expect(outcomes).toEqual([]);
+    } finally {
+      await small.close();
+    }
+  });
+
   it("refuses recipients at another domain at RCPT time and stores nothing", async () => {
     const before = (await emailMessages()).length;
     const unmatchedBefore = await ctx.db("unmatched_inbound").count<{ count: string }[]>("* as count");
