@@ -15,6 +15,7 @@ import type { FilingOutcome } from "./service.ts";
 
 const RUTH = "ruth.okonkwo@mail.example";
 const TOMASZ = "tomasz.brandt@mail.example";
+const LUCIA = "lucia.marchetti@mail.example";
 
 let ctx: TestContext;
 let photoDir: string;
@@ -185,14 +186,32 @@ describe("inbound e-mail replies", () => {
     // Staff see what was refused in the thread (a staff-only note) ...
     const note = await ctx.db("messages").where({ conversation_id: ctx.db("messages").where({ id: filed.id }).select("conversation_id"), kind: "note" }).orderBy("id", "desc").first<{ text: string }>("text");
     expect(note.text).toContain("invoice.pdf: Only photos (JPEG, PNG, WebP, HEIC) can be attached.");
-    expect(note.text).toContain("broken.jpg: One of the photos could not be read.");
+    expect(note.text).toContain("broken.jpg: This photo could not be read.");
 
     // ... and the homeowner gets one short automatic e-mail with the reasons.
     const notice = await waitForMessage(ctx.fakes, RUTH);
-    expect(notice.subject).toBe("We couldn't add your attachment");
+    expect(notice.subject).toBe("We couldn't add your attachments");
+    expect(notice.text).toContain("We could not add 2 of the files you attached:");
     expect(notice.text).toContain("invoice.pdf: Only photos (JPEG, PNG, WebP, HEIC) can be attached.");
-    expect(notice.text).toContain("broken.jpg: One of the photos could not be read.");
+    expect(notice.text).toContain("broken.jpg: This photo could not be read.");
     expect((await ctx.fakes.listOutbox()).filter((m) => m.to === RUTH)).toHaveLength(1);
+  });
+
+  it("tells a Spanish-speaking homeowner in Spanish", async () => {
+    const lucia = await createPlanFixture(ctx.db, { customerRef: "C-1005" });
+    await ctx.db("notification_preferences")
+      .insert({ customer_id: lucia.customerId, channels: "email", daily_time: "08:00", language: "es" })
+      .onConflict("customer_id")
+      .merge(["language"]);
+    const luciaAddress = replyAddress(await replyTokenForPlan(ctx.db, lucia.planId), domain);
+    const text = ["Aquí está la factura.", "", "Enviado desde mi iPhone", "", "El lun, 30 nov 2026 a las 16:02, Cobblefield Lawn", `<${luciaAddress}> escribió:`, "> Su visita está reservada."].join("\n");
+    await deliver({ from: LUCIA, to: luciaAddress, text, attachments: [{ filename: "factura.pdf", content: Buffer.from("%PDF-1.4\n%%EOF\n") }] });
+
+    const filed = await ctx.db("messages").join("conversations", "conversations.id", "messages.conversation_id").where({ "conversations.plan_id": lucia.planId, "messages.kind": "question" }).first<{ text: string }>("messages.text");
+    expect(filed.text).toBe("Aquí está la factura.");
+    const notice = await waitForMessage(ctx.fakes, LUCIA);
+    expect(notice.subject).toBe("No pudimos agregar su archivo adjunto");
+    expect(notice.text).toContain("factura.pdf: Solo se pueden adjuntar fotos (JPEG, PNG, WebP, HEIC).");
   });
 
   it("does not answer an autoresponder's refused attachment by e-mail", async () => {

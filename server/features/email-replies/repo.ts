@@ -8,6 +8,8 @@ export type ReplyTarget = {
   companyId: number;
   customerUserId: number;
   customerEmail: string | null;
+  /** The homeowner's language for automatic e-mails. */
+  language: "en" | "es";
 };
 
 export async function replyTarget(db: Db, token: string): Promise<ReplyTarget | undefined> {
@@ -16,12 +18,21 @@ export async function replyTarget(db: Db, token: string): Promise<ReplyTarget | 
     .join("properties", "properties.id", "care_plans.property_id")
     .join("customers", "customers.id", "properties.customer_id")
     .join("users", "users.id", "customers.user_id")
+    .leftJoin("notification_preferences", "notification_preferences.customer_id", "customers.id")
     .where("conversations.reply_token", token)
-    .first<{ conversation_id: number; plan_id: number; company_id: number; user_id: number; email: string | null } | undefined>(
+    .first<{ conversation_id: number; plan_id: number; company_id: number; user_id: number; email: string | null; language: string | null } | undefined>(
       "conversations.id as conversation_id", "care_plans.id as plan_id", "customers.company_id", "users.id as user_id", "users.email",
+      "notification_preferences.language",
     );
   return (
-    row && { conversationId: row.conversation_id, planId: row.plan_id, companyId: row.company_id, customerUserId: row.user_id, customerEmail: row.email }
+    row && {
+      conversationId: row.conversation_id,
+      planId: row.plan_id,
+      companyId: row.company_id,
+      customerUserId: row.user_id,
+      customerEmail: row.email,
+      language: row.language === "es" ? "es" : "en",
+    }
   );
 }
 

@@ -1,6 +1,7 @@
 import { photoLimits } from "#shared/schemas/questions";
 import type { Db } from "../../db.ts";
 import { HttpError } from "../../http/errors.ts";
+import { escapeHtml } from "../../messaging/escape-html.ts";
 import type { Messenger } from "../../messaging/messenger.ts";
 import type { PhotoStorage } from "../../storage/index.ts";
 import { processPhoto, type ProcessedPhoto } from "../photos/image-pipeline.ts";
@@ -9,6 +10,7 @@ import { insertPhotoRows } from "../photos/repo.ts";
 import { replyAddress, tokenFromAddress } from "../questions/reply-address.ts";
 import { companyName } from "../questions/repo.ts";
 import type { InboundAttachment, InboundEmail } from "./parse.ts";
+import { refusal, refusalLines, refusalNotice, refusalOfPipelineError, type Refusal } from "./refusal-notice.ts";
 import * as repo from "./repo.ts";
 import { stripReply } from "./strip-reply.ts";
 
@@ -20,7 +22,7 @@ export type EmailReplyDeps = {
   log: (message: string, err?: unknown) => void;
 };
 
-export type Refusal = { filename: string; reason: string };
+export type { Refusal } from "./refusal-notice.ts";
 
 export type FilingOutcome =
   | { kind: "filed"; messageId: number; photos: number; refused: Refusal[] }
@@ -47,22 +49,20 @@ async function processAttachments(attachments: readonly InboundAttachment[], log
   for (const [index, attachment] of attachments.entries()) {
     const filename = attachment.filename ?? `attachment ${index + 1}`;
     if (accepted.length >= photoLimits.maxCount) {
-      refused.push({ filename, reason: `Only the first ${photoLimits.maxCount} photos of one e-mail are added.` });
+      refused.push(refusal(filename, "too_many"));
     } else if (attachment.data.length > photoLimits.maxBytes) {
-      refused.push({ filename, reason: `Each photo must be smaller than ${photoLimits.maxBytes / (1024 * 1024)} MB.` });
+      refused.push(refusal(filename, "file_too_large"));
     } else {
       try {
         accepted.push(await processPhoto(attachment.data));
       } catch (err) {
-        if (!(err instanceof HttpError)) log(`e-mail attachment "${filename}" failed the photo pipeline unexpectedly`, err);
-        refused.push({ filename, reason: err instanceof HttpError ? err.message : "This file could not be read as a photo." });
+        if (!(err instanceof HttpError)) log("an e-mail attachment failed the photo pipeline unexpectedly", err);
+        refused.push(refusalOfPipelineError(filename, err));
       }
     }
   }
   return { accepted, refused };
 }
-
-const refusalLines = (refused: readonly Refusal[]) => refused.map((r) => `- ${r.filename}: ${r.reason}`).join("\n");
 
 /**
  * Tells the homeowner which attachments were not added, by e-mail to their address on file (the
@@ -73,28 +73,17 @@ const refusalLines = (refused: readonly Refusal[]) => refused.map((r) => `- ${r.
 async function sendRefusalNotice(deps: EmailReplyDeps, email: InboundEmail, target: repo.ReplyTarget, token: string, refused: Refusal[]) {
   if (email.automated || !target.customerEmail) return;
   const company = await companyName(deps.db, target.companyId);
-  const count = refused.length === 1 ? "one of the files" : `${refused.length} of the files`;
-  const text = [
-    `Your message reached ${company} and is with our team.`,
-    "",
-    `We could not add ${count} you attached:`,
-    refusalLines(refused),
-    "",
-    "To send a photo, reply to this e-mail with the picture straight from your camera or gallery, or add it to your question in the portal.",
-    "",
-    company,
-  ].join("\n");
-  const escape = (s: string) => s.replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;");
-  const html = text.split("\n\n").map((p) => `<p>${escape(p).replace(/\n/g, "<br>")}</p>`).join("\n");
+  const { subject, text } = refusalNotice(company, refused, target.language);
+  const html = text.split("\n\n").map((p) => `<p>${escapeHtml(p).replace(/\n/g, "<br>")}</p>`).join("\n");
   const headers: Record<string, string> = { "Auto-Submitted": "auto-replied", "Reply-To": replyAddress(token, deps.inboundDomain) };
   if (email.messageId) {
     headers["In-Reply-To"] = email.messageId;
     headers["References"] = [...email.references, email.messageId].join(" ");
   }
   try {
-    await deps.messenger.sendEmail({ to: target.customerEmail, subject: "We couldn't add your attachment", text, html, headers });
+    await deps.messenger.sendEmail({ to: target.customerEmail, subject, text, html, headers });
   } catch (err) {
-    deps.log(`could not tell ${target.customerEmail} about a refused attachment`, err);
+    deps.log(`could not tell the homeowner of conversation ${target.conversationId} about a refused attachment`, err);
   }
 }
 
