@@ -46,6 +46,11 @@ async function emailMessages() {
     .select("messages.id", "messages.kind", "messages.text", "messages.external_id", "messages.author_user_id");
 }
 
+async function companyOf(email: string): Promise<number> {
+  const row = await ctx.db("customers").join("users", "users.id", "customers.user_id").where("users.email", email).first<{ company_id: number }>("customers.company_id");
+  return row.company_id;
+}
+
 async function filesUnder(dir: string): Promise<string[]> {
   const entries = await readdir(dir, { recursive: true, withFileTypes: true }).catch(() => []);
   return entries.filter((e) => e.isFile()).map((e) => e.name);
@@ -145,8 +150,17 @@ describe("inbound e-mail replies", () => {
 
     expect((await emailMessages()).length).toBe(before);
     const kept = await ctx.db("unmatched_inbound").where({ channel: "email", external_id: messageId }).select("sender", "body", "company_id", "media_count");
-    expect(kept).toEqual([{ sender: RUTH, body: "Is it time to feed?", company_id: null, media_count: 0 }]);
+    // The sender is a homeowner of one company, so that company's managers get to see it.
+    expect(kept).toEqual([{ sender: RUTH, body: "Is it time to feed?", company_id: await companyOf(RUTH), media_count: 0 }]);
     expect(outcomes).toEqual([{ kind: "unmatched", reason: "unknown_token" }]);
+  });
+
+  it("keeps an e-mail from a stranger without a reply address as unmatched, with no company", async () => {
+    const messageId = newMessageId();
+    await deliver({ from: "someone@stranger.example", to: `hello@${domain}`, messageId, text: "Do you do snow removal?" });
+    const kept = await ctx.db("unmatched_inbound").where({ channel: "email", external_id: messageId }).select("sender", "body", "company_id");
+    expect(kept).toEqual([{ sender: "someone@stranger.example", body: "Do you do snow removal?", company_id: null }]);
+    expect(outcomes).toEqual([{ kind: "unmatched", reason: "no_token" }]);
   });
 
   it("keeps a reply from someone other than the conversation's homeowner (a forward) as unmatched for that company", async () => {
@@ -155,9 +169,8 @@ describe("inbound e-mail replies", () => {
     await deliver({ from: TOMASZ, to: address, messageId, text: gmailReply("My neighbour forwarded this. Can you do my lawn too?"), attachments: [{ filename: "a.png", content: await smallPng() }] });
 
     expect((await emailMessages()).length).toBe(before);
-    const company = await ctx.db("customers").join("users", "users.id", "customers.user_id").where("users.email", RUTH).first<{ company_id: number }>("customers.company_id");
     const kept = await ctx.db("unmatched_inbound").where({ channel: "email", external_id: messageId }).select("sender", "body", "company_id", "media_count");
-    expect(kept).toEqual([{ sender: TOMASZ, body: "My neighbour forwarded this. Can you do my lawn too?", company_id: company.company_id, media_count: 1 }]);
+    expect(kept).toEqual([{ sender: TOMASZ, body: "My neighbour forwarded this. Can you do my lawn too?", company_id: await companyOf(RUTH), media_count: 1 }]);
     expect(outcomes).toEqual([{ kind: "unmatched", reason: "sender_mismatch" }]);
   });
 

@@ -36,6 +36,8 @@ export async function startInboundSmtp(deps: EmailReplyDeps, options: InboundSmt
     disabledCommands: options.tls ? ["AUTH"] : ["AUTH", "STARTTLS"],
     disableReverseLookup: true,
     size: options.maxBytes,
+    // Each connection may hold a message of maxBytes and its photos in memory while it is filed.
+    maxClients: 20,
     logger: false,
     onRcptTo(address, _session, callback) {
       const at = address.address.lastIndexOf("@");

@@ -65,6 +65,19 @@ export async function insertSystemNote(trx: Knex.Transaction, conversationId: nu
   await trx("messages").insert({ conversation_id: conversationId, kind: "note", author_user_id: null, text, source: "email" });
 }
 
+/**
+ * The company of a sender we know as a homeowner, when exactly one company has them: an unmatched
+ * e-mail (e.g. a mistyped token) then reaches that company's managers instead of nobody.
+ */
+export async function companyOfSender(db: Db, email: string): Promise<number | null> {
+  const companies = await db("customers")
+    .join("users", "users.id", "customers.user_id")
+    .whereRaw("lower(users.email) = ?", [email.toLowerCase()])
+    .distinct()
+    .pluck<number[]>("customers.company_id");
+  return companies.length === 1 ? companies[0]! : null;
+}
+
 /** Kept for managers instead of dropped; the same e-mail delivered twice is kept once. */
 export async function keepUnmatched(
   db: Db,

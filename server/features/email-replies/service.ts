@@ -101,7 +101,7 @@ export async function fileInboundEmail(deps: EmailReplyDeps, email: InboundEmail
   if (!token || !target || !senderMatches) {
     const attachments = email.attachments.filter((a) => !isDecoration(a));
     await repo.keepUnmatched(deps.db, {
-      companyId: target?.companyId ?? null,
+      companyId: target?.companyId ?? (email.from ? await repo.companyOfSender(deps.db, email.from) : null),
       sender: email.from ?? "(no sender)",
       body: bodyOf(email),
       mediaCount: attachments.length,
