@@ -19,7 +19,7 @@ import { homeownerCookie } from "./api/sign-in.ts";
 import { startFakes } from "../server/fakes/index.ts";
 
 const repoRoot = resolve(import.meta.dirname, "..");
-const ports = { app: 5790, sms: 5791, oauth: 5792, smtp: 5793 };
+const ports = { app: 5790, sms: 5791, oauth: 5792, smtp: 5793, inboundSmtp: 5794 };
 
 if ((await run("vite", ["build", "--logLevel", "warn"])) !== 0) process.exit(1);
 const stack = await startStack({ nodeEnv: "test", ports, database: "sproutline_bench_lighthouse", freshDatabase: true, apps: "built", quiet: true });

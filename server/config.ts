@@ -21,6 +21,13 @@ const envSchema = z
     EMAIL_FROM: z.string().default("Sproutline <plans@sproutline.example>"),
     // Replies to customer e-mails go to reply+<token>@ this domain, whose mail the inbound SMTP listener receives.
     INBOUND_EMAIL_DOMAIN: z.string().min(3).default("replies.sproutline.example"),
+    // The inbound SMTP listener (server/inbound-email.ts) that the domain's MX, or a relay in front of it, delivers to.
+    INBOUND_SMTP_HOST: z.string().default("127.0.0.1"),
+    INBOUND_SMTP_PORT: z.coerce.number().int().min(0).max(65535).default(5184),
+    INBOUND_SMTP_MAX_BYTES: z.coerce.number().int().min(1024).default(30 * 1024 * 1024),
+    /** PEM files; when both are set the listener offers STARTTLS. */
+    INBOUND_SMTP_TLS_KEY: z.string().optional(),
+    INBOUND_SMTP_TLS_CERT: z.string().optional(),
 
     TWILIO_ACCOUNT_SID: z.string().default("AC00000000000000000000000000000000"),
     TWILIO_AUTH_TOKEN: z.string().default("local-fake-auth-token"),

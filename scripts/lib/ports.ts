@@ -5,9 +5,9 @@
  */
 export const postgresPort = 54329;
 
-export type StackPorts = { app: number; sms: number; oauth: number; smtp: number };
+export type StackPorts = { app: number; sms: number; oauth: number; smtp: number; inboundSmtp: number };
 
-const portsFrom = (base: number): StackPorts => ({ app: base, sms: base + 1, oauth: base + 2, smtp: base + 3 });
+const portsFrom = (base: number): StackPorts => ({ app: base, sms: base + 1, oauth: base + 2, smtp: base + 3, inboundSmtp: base + 4 });
 const envBase = Number(process.env.SPROUTLINE_PORT_BASE);
 const base = Number.isInteger(envBase) && envBase > 1024 ? envBase : 5180;
 

@@ -1,9 +1,10 @@
 /**
- * Runs the whole product locally: PostgreSQL, the fakes of hosted services and the
- * server, each started here and stopped again on Ctrl-C. Used by `npm start`,
- * `npm run dev` and the browser tests.
+ * Runs the whole product locally: PostgreSQL, the fakes of hosted services, the server,
+ * the reminder worker and the inbound e-mail listener, each started here and stopped
+ * again on Ctrl-C. Used by `npm start`, `npm run dev` and the browser tests.
  */
 import { spawn, type ChildProcess } from "node:child_process";
+import { connect } from "node:net";
 import { resolve } from "node:path";
 import { createDb } from "../../server/db.ts";
 import { demoStaff } from "../../seeds/data/demo-company.ts";
@@ -25,6 +26,8 @@ export type RunningStack = {
   appUrl: string;
   fakesControlUrl: string;
   databaseUrl: string;
+  /** Where e-mail replies are delivered (SMTP on 127.0.0.1). */
+  inboundSmtpPort: number;
   stop(): Promise<void>;
 };
 
@@ -60,6 +63,22 @@ async function waitFor(url: string, what: string, timeoutMs = 60_000) {
     await new Promise((r) => setTimeout(r, 250));
   }
   throw new Error(`${what} did not come up at ${url} within ${timeoutMs / 1000} s`);
+}
+
+async function waitForPort(port: number, what: string, timeoutMs = 30_000) {
+  const deadline = Date.now() + timeoutMs;
+  while (Date.now() < deadline) {
+    const open = await new Promise<boolean>((done) => {
+      const socket = connect(port, "127.0.0.1", () => {
+        socket.destroy();
+        done(true);
+      });
+      socket.on("error", () => done(false));
+    });
+    if (open) return;
+    await new Promise((r) => setTimeout(r, 250));
+  }
+  throw new Error(`${what} did not come up on port ${port} within ${timeoutMs / 1000} s`);
 }
 
 function stopChild(child: ChildProcess): Promise<void> {
@@ -126,19 +145,26 @@ export async function startStack(options: StackOptions): Promise<RunningStack> {
     TWILIO_API_BASE_URL: `http://127.0.0.1:${ports.sms}`,
     GOOGLE_AUTH_BASE_URL: `http://127.0.0.1:${ports.oauth}`,
     FAKES_CONTROL_URL: fakesControlUrl,
+    INBOUND_SMTP_HOST: "127.0.0.1",
+    INBOUND_SMTP_PORT: String(ports.inboundSmtp),
     SERVE_APPS: options.apps,
   };
   const server = startChild("server", "server/main.ts", serverEnv, quiet);
   await waitFor(`http://127.0.0.1:${ports.app}/api/health`, "the Sproutline server");
   // The reminder worker (server/worker.ts) runs beside the server with the same settings.
   const worker = startChild("worker", "server/worker.ts", serverEnv, quiet);
+  // The inbound SMTP listener for e-mail replies (server/inbound-email.ts), also with the same settings.
+  const inboundEmail = startChild("inbound-email", "server/inbound-email.ts", serverEnv, quiet);
+  await waitForPort(ports.inboundSmtp, "the inbound e-mail listener");
 
   return {
     appUrl,
     fakesControlUrl,
     databaseUrl,
+    inboundSmtpPort: ports.inboundSmtp,
     stop: async () => {
       stopping = true;
+      await stopChild(inboundEmail);
       await stopChild(worker);
       await stopChild(server);
       await stopChild(fakes);
