@@ -32,7 +32,8 @@ export async function dayVisits(db: Db, companyId: number, technicianId: number 
       w.where((today_) => today_.whereIn("f.scheduled_for", [today, tomorrow]).andWhereNot("f.status", "closed"))
         .orWhere((late) => late.where("f.scheduled_for", "<", today).whereIn("f.status", ["requested", "scheduled"]));
     })
-    .orderByRaw("f.scheduled_for, f.arrival_start nulls last, f.id")
+    // Today and tomorrow before the overdue ones, so a long overdue backlog never pushes today off the list.
+    .orderByRaw("(f.scheduled_for >= ?) desc, f.scheduled_for, f.arrival_start nulls last, f.id", [today])
     .limit(DAY_LIMIT * 3)
     .select<VisitRow[]>(
       "f.id", db.raw("to_char(f.scheduled_for, 'YYYY-MM-DD') as date"), "f.status", "f.arrival_start", "f.arrival_end", "f.reason",
