@@ -22,6 +22,8 @@ import { questionRoutes } from "./features/questions/routes.ts";
 import { photoRoutes } from "./features/photos/routes.ts";
 import { calendarRoutes } from "./features/calendar/routes.ts";
 import { programRoutes } from "./features/programs/routes.ts";
+import { staffDayRoutes } from "./features/staff-day/routes.ts";
+import { homeownerViewRoutes } from "./features/homeowner-view/routes.ts";
 
 /**
  * The server's whole API route table. The authorisation matrix test reads it, so a
@@ -48,6 +50,8 @@ export function collectRoutes(deps: AppDeps): RouteSpec[] {
     ...teamRoutes(deps),
     ...savedReplyRoutes(deps.db),
     ...customerRoutes(deps.db),
+    ...staffDayRoutes(deps.db),
+    ...homeownerViewRoutes(deps.db),
     ...visitImportRoutes(deps.db, reminderPlanHook),
     ...devOutboxRoutes(deps.config),
   ];

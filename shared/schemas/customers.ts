@@ -48,15 +48,25 @@ export type CustomerConversation = z.infer<typeof customerConversationSchema>;
 
 export const REMINDER_STATES = ["scheduled", "sending", "sent", "delivered", "failed", "cancelled", "skipped_opted_out"] as const;
 
+/** Plan reminders and notices (answers, visit changes, the welcome message) share the ledger. */
+export const CUSTOMER_REMINDER_KINDS = ["daily_summary", "watering_nudge", "conversation_update", "visit_update", "welcome"] as const;
+
 /** One reminder from the ledger with how its delivery went. */
 export const customerReminderSchema = z.object({
   id: z.number().int(),
   planId: z.number().int(),
-  kind: z.enum(["daily_summary", "watering_nudge"]),
+  kind: z.enum(CUSTOMER_REMINDER_KINDS),
   channel: z.enum(["sms", "email"]),
+  /** The plan day and wall-clock time the reminder was asked for (e.g. the 06:00 watering). */
   localDate: z.string(),
   localTime: z.string(),
   dueAt: z.string(),
+  /** When it really goes out (`dueAt`) on the lawn's calendar and clock: held to the allowed hours. */
+  sendDate: z.string(),
+  sendTime: z.string(),
+  timeZone: z.string(),
+  /** The asked-for time was outside the hours the customer allows, so sending waits for them. */
+  heldForQuietHours: z.boolean(),
   state: z.enum(REMINDER_STATES),
   attempts: z.number().int(),
   lastError: z.string().nullable(),

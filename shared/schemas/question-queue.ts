@@ -57,3 +57,28 @@ export const assignQuestionResponseSchema = z.object({
   assignedToName: z.string().nullable(),
 });
 export type AssignQuestionResponse = z.infer<typeof assignQuestionResponseSchema>;
+
+/**
+ * GET /api/questions/answered: questions of the company a staff answer followed in the last
+ * `days` days, the most recently answered first, with who answered.
+ */
+export const answeredQuestionsQuerySchema = z.object({
+  days: z.coerce.number().int().min(1).max(30).default(7),
+});
+export const answeredQuestionSchema = z.object({
+  messageId: z.number().int(),
+  planId: z.number().int(),
+  customerName: z.string(),
+  street: z.string(),
+  text: z.string(),
+  askedAt: z.string(),
+  /** When the first staff answer followed the question. */
+  answeredAt: z.string(),
+  answeredByName: z.string().nullable(),
+  answerText: z.string(),
+  /** Closed by staff (it left the open queue); false while the question stays open. */
+  resolved: z.boolean(),
+});
+export type AnsweredQuestion = z.infer<typeof answeredQuestionSchema>;
+export const answeredQuestionsResponseSchema = z.object({ days: z.number().int(), questions: z.array(answeredQuestionSchema) });
+export type AnsweredQuestionsResponse = z.infer<typeof answeredQuestionsResponseSchema>;

@@ -72,7 +72,7 @@ describe("customer page", () => {
     expect(res.body.reminders.length).toBeLessThanOrEqual(50);
     expect(res.body.reminders[0]).toEqual({
       id: Number(reminder!.id), planId: plan!.id, kind: "daily_summary", channel: "sms", localDate: "2099-06-01", localTime: "08:00",
-      dueAt: dueAt.toISOString(), state: "failed", attempts: 3, lastError: "Unreachable handset (test)", sentAt: null,
+      dueAt: dueAt.toISOString(), sendDate: "2099-06-01", sendTime: "08:00", timeZone: "America/New_York", heldForQuietHours: false, state: "failed", attempts: 3, lastError: "Unreachable handset (test)", sentAt: null,
     });
 
     // Audit entries are written after the response; give it a moment.

@@ -103,7 +103,11 @@ export async function conversationsOfCustomer(db: Db, customerId: number): Promi
   }));
 }
 
-/** The customer's most recent reminders (by due time) with their delivery state. */
+/**
+ * The customer's most recent reminders (by due time) with their delivery state. `local_time` is
+ * the time the plan asked for; `due_at` is when the worker really sends it (held to the allowed
+ * hours), so the page shows `due_at` on the lawn's clock.
+ */
 export async function remindersOfCustomer(db: Db, customerId: number): Promise<CustomerReminder[]> {
   const rows = await db("reminders")
     .where({ customer_id: customerId })
@@ -111,10 +115,18 @@ export async function remindersOfCustomer(db: Db, customerId: number): Promise<C
     .limit(CUSTOMER_REMINDERS_LIMIT)
     .select<{
       id: string | number; plan_id: number; kind: CustomerReminder["kind"]; channel: CustomerReminder["channel"]; local_date: string; local_time: string;
-      due_at: Date; state: CustomerReminder["state"]; attempts: number; last_error: string | null; sent_at: Date | null;
-    }[]>("id", "plan_id", "kind", "channel", "local_date", "local_time", "due_at", "state", "attempts", "last_error", "sent_at");
+      due_at: Date; send_date: string; send_time: string; time_zone: string; state: CustomerReminder["state"]; attempts: number;
+      last_error: string | null; sent_at: Date | null; fallback_for: string | number | null;
+    }[]>(
+      "id", "plan_id", "kind", "channel", "local_date", "local_time", "due_at", "time_zone", "fallback_for", "state", "attempts", "last_error", "sent_at",
+      db.raw("to_char(due_at at time zone time_zone, 'YYYY-MM-DD') as send_date"),
+      db.raw("to_char(due_at at time zone time_zone, 'HH24:MI') as send_time"),
+    );
   return rows.map((r) => ({
     id: Number(r.id), planId: r.plan_id, kind: r.kind, channel: r.channel, localDate: r.local_date, localTime: r.local_time,
-    dueAt: r.due_at.toISOString(), state: r.state, attempts: r.attempts, lastError: r.last_error, sentAt: r.sent_at ? r.sent_at.toISOString() : null,
+    dueAt: r.due_at.toISOString(), sendDate: r.send_date, sendTime: r.send_time, timeZone: r.time_zone,
+    // A fallback on the other channel is due when the first one failed, not because of the hours.
+    heldForQuietHours: r.fallback_for === null && (r.send_date !== r.local_date || r.send_time !== r.local_time),
+    state: r.state, attempts: r.attempts, lastError: r.last_error, sentAt: r.sent_at ? r.sent_at.toISOString() : null,
   }));
 }

@@ -12,7 +12,8 @@ import { findPlanForUser } from "../plans/access.ts";
 import { photoUpload, uploadedBuffers } from "../photos/upload.ts";
 import { answerQuestion, askQuestion, readThread, type QuestionDeps } from "./service.ts";
 import { assignQuestion, openQuestions } from "./queue.ts";
-import { assignQuestionSchema, questionMessageParamsSchema } from "#shared/schemas/question-queue";
+import { answeredQuestionsQuerySchema, assignQuestionSchema, questionMessageParamsSchema } from "#shared/schemas/question-queue";
+import { recentlyAnswered } from "./answered.ts";
 
 const customerOnly = ["customer"] as const satisfies readonly Role[];
 const staff = ["technician", "manager"] as const satisfies readonly Role[];
@@ -41,6 +42,13 @@ export function questionRoutes(deps: Pick<AppDeps, "config" | "db">, storage: Ph
       path: "/api/questions/open",
       access: staff,
       handler: async ({ user }) => ({ questions: await openQuestions(deps.db, user.companyId) }),
+    }),
+    route({
+      method: "get",
+      path: "/api/questions/answered",
+      access: staff,
+      query: answeredQuestionsQuerySchema,
+      handler: async ({ user, query }) => ({ days: query.days, questions: await recentlyAnswered(deps.db, user.companyId, query.days) }),
     }),
     route({
       method: "post",

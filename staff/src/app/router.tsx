@@ -56,6 +56,10 @@ export const router = createBrowserRouter(
                 { path: "customers", lazy: () => import("../features/customers/customers-route.tsx").then((m) => ({ Component: m.CustomersRoute })) },
                 { path: "customers/:customerId", lazy: () => import("../features/customers/customer-route.tsx").then((m) => ({ Component: m.CustomerRoute })) },
                 {
+                  path: "plans/:planId/as-homeowner",
+                  lazy: () => import("../features/homeowner-view/homeowner-view-route.tsx").then((m) => ({ Component: m.HomeownerViewRoute })),
+                },
+                {
                   // Manager screens: hidden from technicians in the nav, and a plain "Managers only" page if opened directly.
                   element: <ManagersOnly />,
                   children: [

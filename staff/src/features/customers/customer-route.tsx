@@ -1,13 +1,12 @@
 import { useEffect } from "react";
 import { Link, useLocation, useParams } from "react-router-dom";
 import { ErrorState, LoadingState, NotFoundPage, Page, isApiRequestError } from "#shared/ui/index";
-import { CUSTOMER_REMINDERS_LIMIT } from "#shared/schemas/customers";
 import { useCustomer } from "./api/get-customer.ts";
 import { ConversationList } from "./components/conversation-list.tsx";
 import { FollowUpList } from "./components/follow-up-list.tsx";
 import { PlanCard } from "./components/plan-card.tsx";
 import { PropertyList } from "./components/property-list.tsx";
-import { ReminderList } from "./components/reminder-list.tsx";
+import { ReminderDisclosure } from "./components/reminder-disclosure.tsx";
 import { Section } from "./components/section.tsx";
 import { VisitList } from "./components/visit-list.tsx";
 
@@ -60,9 +59,6 @@ function CustomerPage({ id }: { id: number }) {
       }
     >
       <div className="flex flex-col gap-8">
-        <Section title="Lawns" count={properties.length} empty="No lawns recorded.">
-          <PropertyList properties={properties} />
-        </Section>
         <Section title="Care plans" count={plans.length} empty="No care plan yet. Logging a visit creates one.">
           <div className="grid gap-3 md:grid-cols-2">
             {plans.map((plan) => (
@@ -73,16 +69,16 @@ function CustomerPage({ id }: { id: number }) {
         <Section title="Conversations" count={conversations.length} empty="No questions or messages yet.">
           <ConversationList conversations={conversations} streetOfPlan={streetOfPlan} />
         </Section>
-        <Section title="Visits" count={visits.length} empty="No visits logged yet.">
-          <VisitList visits={visits} streetOf={streetOf} />
-        </Section>
         <Section title="Follow-up visits" count={followUps.length} empty="No follow-up visits.">
           <FollowUpList followUps={followUps} />
         </Section>
-        <Section title="Reminders" count={reminders.length} empty="No reminders scheduled or sent yet.">
-          <p className="text-base text-ink-soft">The most recent {CUSTOMER_REMINDERS_LIMIT} at most, latest first.</p>
-          <ReminderList reminders={reminders} />
+        <Section title="Visits" count={visits.length} empty="No visits logged yet.">
+          <VisitList visits={visits} streetOf={streetOf} />
         </Section>
+        <Section title="Lawns" count={properties.length} empty="No lawns recorded.">
+          <PropertyList properties={properties} />
+        </Section>
+        <ReminderDisclosure reminders={reminders} />
       </div>
     </Page>
   );

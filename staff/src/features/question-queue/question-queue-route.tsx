@@ -1,9 +1,10 @@
 import { Suspense, lazy } from "react";
-import { useSearchParams } from "react-router-dom";
+import { Link, useSearchParams } from "react-router-dom";
 import { EmptyState, ErrorState, LoadingState, Page, useSignedInUser } from "#shared/ui/index";
 import { useOpenQuestions } from "../../common/api/open-questions.ts";
 import { QueueCards } from "./components/queue-cards.tsx";
 import { QueueFilters } from "./components/queue-filters.tsx";
+import { ANSWERED_DAY_CHOICES, RecentlyAnswered } from "./components/recently-answered.tsx";
 import { QUEUE_FILTER_LABELS, buildRows, countByFilter, countByService, filterRows, isQueueFilter, type QueueFilter } from "./lib/queue-rows.ts";
 import { useNow } from "./lib/use-now.ts";
 import { useWideScreen } from "./lib/use-wide-screen.ts";
@@ -12,8 +13,38 @@ import { useWideScreen } from "./lib/use-wide-screen.ts";
 // on a technician's phone the queue is a list of cards.
 const QueueTable = lazy(() => import("./components/queue-table.tsx").then((m) => ({ default: m.QueueTable })));
 
-/** The question queue: homeowners' open questions, unanswered ones first, oldest waiting at the top. */
+const viewLinkClass =
+  "inline-flex min-h-11 items-center rounded-lg border-2 border-pine-700 px-4 font-semibold text-pine-700 no-underline hover:bg-pine-50 aria-[current=page]:bg-pine-700 aria-[current=page]:text-white";
+
+/** Open questions, or those answered lately; the choice lives in the address so Back works. */
+function ViewSwitch({ answered }: { answered: boolean }) {
+  return (
+    <nav aria-label="Questions" className="mb-5 flex flex-wrap gap-2">
+      <Link to="/questions" className={viewLinkClass} aria-current={answered ? undefined : "page"}>
+        Open
+      </Link>
+      <Link to="/questions?view=answered" className={viewLinkClass} aria-current={answered ? "page" : undefined}>
+        Recently answered
+      </Link>
+    </nav>
+  );
+}
+
 export function QuestionQueueRoute() {
+  const [params, setParams] = useSearchParams();
+  if (params.get("view") !== "answered") return <OpenQueue />;
+  const asked = Number(params.get("days"));
+  const days = (ANSWERED_DAY_CHOICES as readonly number[]).includes(asked) ? asked : 7;
+  return (
+    <Page title="Recently answered" heading="Question queue" width="wide" intro="Questions the team answered lately, the newest answer first, with who answered.">
+      <ViewSwitch answered />
+      <RecentlyAnswered days={days} onDaysChange={(d) => setParams({ view: "answered", days: String(d) }, { replace: true })} />
+    </Page>
+  );
+}
+
+/** The question queue: homeowners' open questions, unanswered ones first, oldest waiting at the top. */
+function OpenQueue() {
   const user = useSignedInUser();
   const now = useNow();
   const questions = useOpenQuestions();
@@ -39,6 +70,7 @@ export function QuestionQueueRoute() {
 
   return (
     <Page title="Question queue" width="wide" intro="Homeowners' open questions: those waiting for an answer first, oldest at the top. Answer them, or book a follow-up visit.">
+      <ViewSwitch answered={false} />
       {questions.isPending && <LoadingState label="Loading questions…" />}
       {questions.isError && (
         <ErrorState title="The question queue didn't load" error={questions.error} onRetry={() => void questions.refetch()} retrying={questions.isRefetching} />

@@ -29,9 +29,14 @@ export function PlanCard({ plan }: { plan: PlanHeader }) {
         </strong>
         {skipped > 0 && <>, {skipped} skipped</>} · program version {plan.programVersion}
       </p>
-      <Link to={`/questions/${plan.id}`} className="inline-flex min-h-11 items-center self-start font-semibold">
-        Questions and answers on this plan
-      </Link>
+      <div className="flex flex-wrap gap-x-5">
+        <Link to={`/plans/${plan.id}/as-homeowner`} className="inline-flex min-h-11 items-center font-semibold">
+          See it as the homeowner does
+        </Link>
+        <Link to={`/questions/${plan.id}`} className="inline-flex min-h-11 items-center font-semibold">
+          Questions and answers on this plan
+        </Link>
+      </div>
     </article>
   );
 }

@@ -13,7 +13,13 @@ const stateLabels: Record<State, { label: string; className: string }> = {
   cancelled: { label: "Cancelled", className: "bg-rust-50 text-rust-700" },
   skipped_opted_out: { label: "Not sent (opted out)", className: "bg-rust-50 text-rust-700" },
 };
-const kindLabels: Record<CustomerReminder["kind"], string> = { daily_summary: "Daily summary", watering_nudge: "Watering nudge" };
+const kindLabels: Record<CustomerReminder["kind"], string> = {
+  daily_summary: "Daily summary",
+  watering_nudge: "Watering nudge",
+  conversation_update: "Answer notice",
+  visit_update: "Visit notice",
+  welcome: "Welcome message",
+};
 const channelLabels: Record<CustomerReminder["channel"], string> = { sms: "Text", email: "E-mail" };
 const stamp = new Intl.DateTimeFormat(undefined, { dateStyle: "medium", timeStyle: "short" });
 
@@ -22,7 +28,21 @@ function StateBadge({ state }: { state: State }) {
   return <span className={`inline-block rounded-md px-2 text-sm font-semibold whitespace-nowrap ${className}`}>{label}</span>;
 }
 
-const when = (r: CustomerReminder) => `${formatCalendarDay(r.localDate, { withYear: true })} at ${r.localTime}`;
+/** "6:00 am" on the lawn's clock. */
+function clock(hhmm: string): string {
+  const [h, m] = hhmm.split(":").map(Number) as [number, number];
+  return `${h % 12 === 0 ? 12 : h % 12}:${String(m).padStart(2, "0")} ${h < 12 ? "am" : "pm"}`;
+}
+
+/** When it really goes out (the ledger's due time on the lawn's clock), not the time the plan asked for. */
+const when = (r: CustomerReminder) => `${formatCalendarDay(r.sendDate, { withYear: true })} at ${clock(r.sendTime)}`;
+
+/** Why the time differs from what the plan asked for. */
+function HeldNote({ reminder: r }: { reminder: CustomerReminder }) {
+  if (!r.heldForQuietHours) return null;
+  const asked = r.localDate === r.sendDate ? clock(r.localTime) : `${formatCalendarDay(r.localDate)} ${clock(r.localTime)}`;
+  return <span className="block text-base text-ink-soft">Asked for {asked}, held for quiet hours</span>;
+}
 const attemptsText = (n: number) => (n === 1 ? "1 attempt" : `${n} attempts`);
 const sentText = (r: CustomerReminder) => (r.sentAt ? stamp.format(new Date(r.sentAt)) : "—");
 
@@ -35,7 +55,7 @@ export function ReminderList({ reminders }: { reminders: CustomerReminder[] }) {
           <caption className="sr-only">Reminders, most recent first</caption>
           <thead className="border-b-2 border-line bg-canvas">
             <tr>
-              {["Plan day", "Reminder", "Channel", "State", "Attempts", "Sent", "Last error"].map((h) => (
+              {["Sends", "Reminder", "Channel", "State", "Attempts", "Sent", "Last error"].map((h) => (
                 <th key={h} scope="col" className="px-3 py-2 font-semibold">
                   {h}
                 </th>
@@ -45,7 +65,10 @@ export function ReminderList({ reminders }: { reminders: CustomerReminder[] }) {
           <tbody>
             {reminders.map((r) => (
               <tr key={r.id} className="border-b border-line last:border-0">
-                <td className="px-3 py-3 align-top">{when(r)}</td>
+                <td className="px-3 py-3 align-top">
+                  {when(r)}
+                  <HeldNote reminder={r} />
+                </td>
                 <td className="px-3 py-3 align-top">{kindLabels[r.kind]}</td>
                 <td className="px-3 py-3 align-top">{channelLabels[r.channel]}</td>
                 <td className="px-3 py-3 align-top">
@@ -68,7 +91,10 @@ export function ReminderList({ reminders }: { reminders: CustomerReminder[] }) {
               </p>
               <StateBadge state={r.state} />
             </div>
-            <p>{when(r)}</p>
+            <p>
+              {when(r)}
+              <HeldNote reminder={r} />
+            </p>
             <p className="text-base text-ink-soft">
               {attemptsText(r.attempts)}
               {r.sentAt && ` · sent ${sentText(r)}`}

@@ -1,3 +1,4 @@
+import { Link } from "react-router-dom";
 import type { StoredPlan } from "#shared/schemas/plans";
 import { describePlanDay, formatCalendarDay, serviceLabel } from "#shared/ui/index";
 
@@ -36,6 +37,9 @@ export function PlanSummary({ plan }: { plan: StoredPlan }) {
           {done} done, {skipped} skipped, of {total}
         </dd>
       </dl>
+      <Link to={`/plans/${plan.id}/as-homeowner`} className="mt-2 inline-flex min-h-11 items-center font-semibold">
+        See their Today and plan as they do
+      </Link>
     </section>
   );
 }
