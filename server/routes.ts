@@ -22,6 +22,7 @@ import { questionRoutes } from "./features/questions/routes.ts";
 import { photoRoutes } from "./features/photos/routes.ts";
 import { calendarRoutes } from "./features/calendar/routes.ts";
 import { programRoutes } from "./features/programs/routes.ts";
+import { unmatchedInboundRoutes } from "./features/unmatched-inbound/routes.ts";
 
 /**
  * The server's whole API route table. The authorisation matrix test reads it, so a
@@ -42,6 +43,7 @@ export function collectRoutes(deps: AppDeps): RouteSpec[] {
     ...reminderRoutes(deps),
     ...preferencesRoutes(deps),
     ...smsWebhookRoutes(deps),
+    ...unmatchedInboundRoutes(deps.db),
     ...auditRoutes(deps.db),
     ...followUpRoutes(deps.db),
     ...callbackReportRoutes(deps.db),
