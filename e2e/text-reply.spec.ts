@@ -13,6 +13,9 @@ const fakesUrl = process.env.E2E_FAKES_URL ?? "http://127.0.0.1:5191";
 const homeownerPhone = "+13305550116";
 const technician = "marco@cobblefield.example";
 
+/** Each staff screen is its own download, loaded on first visit: on a busy machine that takes a while. */
+const screenLoad = { timeout: 15_000 };
+
 type RecordedSms = { direction: string; to: string; body: string; dateCreated: string };
 
 test("a text with a photo reaches the question queue, is answered, and the answer goes back by text", async ({ page, request }) => {
@@ -26,11 +29,10 @@ test("a text with a photo reaches the question queue, is answered, and the answe
 
   await signInStaff(page, technician);
   await page.goto("/staff/questions");
-  await expect(page.getByRole("heading", { level: 1, name: "Question queue" })).toBeVisible();
+  await expect(page.getByRole("heading", { level: 1, name: "Question queue" })).toBeVisible(screenLoad);
   const card = page.getByRole("listitem").filter({ hasText: words });
   await card.getByTestId("queue-question-link").click();
-  // The question screen is its own download: give a busy machine time.
-  await expect(page.getByRole("heading", { level: 1, name: /^Question from Desmond/ })).toBeVisible({ timeout: 15_000 });
+  await expect(page.getByRole("heading", { level: 1, name: /^Question from Desmond/ })).toBeVisible(screenLoad);
   const question = page.getByTestId("question-card").filter({ hasText: words });
   await expect(question).toBeVisible();
 
@@ -75,7 +77,7 @@ test("a text from an unknown number gets one reply and waits for a manager, who 
   // At phone width the navigation is behind the menu button.
   await page.getByRole("button", { name: "Menu" }).click();
   await page.getByRole("link", { name: "Unmatched messages" }).click();
-  await expect(page.getByRole("heading", { level: 1, name: "Unmatched messages" })).toBeVisible();
+  await expect(page.getByRole("heading", { level: 1, name: "Unmatched messages" })).toBeVisible(screenLoad);
   const waiting = page.getByRole("region", { name: /^Waiting/ });
   const item = waiting.getByRole("listitem").filter({ hasText: words });
   await expect(item).toBeVisible();

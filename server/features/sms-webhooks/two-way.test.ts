@@ -183,6 +183,17 @@ describe("texts we can't file on a plan", () => {
     await ctx.db("companies").where({ slug: "cobblefield" }).update({ phone: null });
   });
 
+  it("from an unknown number, delivered twice: kept once", async () => {
+    const stranger = freshPhone();
+    const params = { From: stranger, To: "+15005550006", Body: "Is this Cobblefield?", MessageSid: "SM00000000000000000000000000ffee03", NumMedia: "0" };
+    const signature = twilio.getExpectedTwilioSignature(ctx.config.TWILIO_AUTH_TOKEN, inboundUrl, params);
+    const first = await request(ctx.app).post("/api/webhooks/sms/inbound").type("form").set("X-Twilio-Signature", signature).send(params).expect(200);
+    expect(first.text).toContain("This number isn't on file");
+    const again = await request(ctx.app).post("/api/webhooks/sms/inbound").type("form").set("X-Twilio-Signature", signature).send(params).expect(200);
+    expect(again.text).not.toContain("<Message>");
+    expect((await unmatchedFrom(stranger)).map((u) => u.body)).toEqual(["Is this Cobblefield?"]);
+  });
+
   it("from a customer with no active plan: kept as unmatched and told to call", async () => {
     const c = await customer();
     await ctx.db("care_plans").where({ id: c.planId }).update({ status: "cancelled" });
