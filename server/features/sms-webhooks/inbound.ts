@@ -71,9 +71,13 @@ async function handleKeyword(db: Db, from: string, keyword: Keyword): Promise<st
  * A repeated webhook (same MessageSid) is neither kept twice nor answered twice.
  */
 async function keepUnmatched(db: Db, text: InboundText, company: Company, reply: string): Promise<string[]> {
-  const id = await insertUnmatched(db, { companyId: company.companyId, sender: text.from, body: text.body.trim(), mediaCount: text.media.length, messageSid: text.messageSid });
-  if (id === undefined) return [];
-  return (await unmatchedRecently(db, text.from, id, UNMATCHED_REPLY_HOURS)) ? [] : [reply];
+  return db.transaction(async (trx) => {
+    // Two texts from one number arriving together (several server processes) still get one reply.
+    await trx.raw("select pg_advisory_xact_lock(hashtext(?))", [`unmatched-sms:${text.from}`]);
+    const id = await insertUnmatched(trx, { companyId: company.companyId, sender: text.from, body: text.body.trim(), mediaCount: text.media.length, messageSid: text.messageSid });
+    if (id === undefined) return [];
+    return (await unmatchedRecently(trx, text.from, id, UNMATCHED_REPLY_HOURS)) ? [] : [reply];
+  });
 }
 
 /**

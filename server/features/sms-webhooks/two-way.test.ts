@@ -194,6 +194,17 @@ describe("texts we can't file on a plan", () => {
     expect((await unmatchedFrom(stranger)).map((u) => u.body)).toEqual(["Is this Cobblefield?"]);
   });
 
+  it("from an unknown number, two texts arriving at once: both kept, one reply", async () => {
+    const stranger = freshPhone();
+    const post = (sid: string, body: string) => {
+      const params = { From: stranger, To: "+15005550006", Body: body, MessageSid: sid, NumMedia: "0" };
+      return request(ctx.app).post("/api/webhooks/sms/inbound").type("form").set("X-Twilio-Signature", twilio.getExpectedTwilioSignature(ctx.config.TWILIO_AUTH_TOKEN, inboundUrl, params)).send(params).expect(200);
+    };
+    const answers = await Promise.all([post("SM00000000000000000000000000ffee04", "one"), post("SM00000000000000000000000000ffee05", "two")]);
+    expect(answers.filter((a) => a.text.includes("<Message>"))).toHaveLength(1);
+    expect((await unmatchedFrom(stranger)).map((u) => u.body).sort()).toEqual(["one", "two"]);
+  });
+
   it("from a customer with no active plan: kept as unmatched and told to call", async () => {
     const c = await customer();
     await ctx.db("care_plans").where({ id: c.planId }).update({ status: "cancelled" });
