@@ -8,6 +8,11 @@ export type FetchedMedia = { ok: true; data: Buffer } | { ok: false; reason: "un
 
 /** Twilio answers media quickly; a customer's text should not wait on a stuck download. */
 const FETCH_TIMEOUT_MS = 10_000;
+/**
+ * All of one text's downloads together: Twilio gives up on the webhook after 15 s, and the reply
+ * (and the stored text) must come before that.
+ */
+export const ALL_MEDIA_TIMEOUT_MS = 12_000;
 
 /**
  * Only the provider's own API origin is fetched (Twilio's, or the configured base URL of the local
@@ -41,7 +46,11 @@ async function readBounded(body: ReadableStream<Uint8Array>, limit: number): Pro
  * media authentication is on. Twilio redirects to its file store; fetch drops the Authorization
  * header on a redirect to another origin, so the credentials never leave the provider.
  */
-export async function fetchMedia(config: Pick<Config, "TWILIO_API_BASE_URL" | "TWILIO_ACCOUNT_SID" | "TWILIO_AUTH_TOKEN">, media: InboundMedia): Promise<FetchedMedia> {
+export async function fetchMedia(
+  config: Pick<Config, "TWILIO_API_BASE_URL" | "TWILIO_ACCOUNT_SID" | "TWILIO_AUTH_TOKEN">,
+  media: InboundMedia,
+  deadline?: AbortSignal,
+): Promise<FetchedMedia> {
   let url: URL;
   try {
     url = new URL(media.url);
@@ -51,7 +60,7 @@ export async function fetchMedia(config: Pick<Config, "TWILIO_API_BASE_URL" | "T
   if (url.origin !== providerOrigin(config)) return { ok: false, reason: "not_allowed" };
   const credentials = Buffer.from(`${config.TWILIO_ACCOUNT_SID}:${config.TWILIO_AUTH_TOKEN}`).toString("base64");
   try {
-    const response = await fetch(url, { headers: { Authorization: `Basic ${credentials}` }, redirect: "follow", signal: AbortSignal.timeout(FETCH_TIMEOUT_MS) });
+    const response = await fetch(url, { headers: { Authorization: `Basic ${credentials}` }, redirect: "follow", signal: deadline ? AbortSignal.any([deadline, AbortSignal.timeout(FETCH_TIMEOUT_MS)]) : AbortSignal.timeout(FETCH_TIMEOUT_MS) });
     if (!response.ok || !response.body) {
       await response.body?.cancel();
       return { ok: false, reason: "unreachable" };

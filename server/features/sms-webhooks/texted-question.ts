@@ -7,7 +7,7 @@ import { processPhoto, type ProcessedPhoto } from "../photos/image-pipeline.ts";
 import { deletePhotoFiles, writePhotoFiles } from "../photos/photo-files.ts";
 import { insertPhotoRows } from "../photos/repo.ts";
 import { ensureConversation } from "../questions/repo.ts";
-import { fetchMedia, type InboundMedia } from "./media.ts";
+import { ALL_MEDIA_TIMEOUT_MS, fetchMedia, type InboundMedia } from "./media.ts";
 import { photoRefusalReasons } from "./replies.ts";
 import { insertTextedQuestion, isUniqueViolation, type Texter } from "./repo.ts";
 
@@ -19,12 +19,13 @@ type RefusalCode = keyof typeof photoRefusalReasons;
 async function photosOf(config: Config, media: readonly InboundMedia[]): Promise<{ photos: ProcessedPhoto[]; refused: RefusalCode[] }> {
   const photos: ProcessedPhoto[] = [];
   const refused: RefusalCode[] = [];
+  const deadline = AbortSignal.timeout(ALL_MEDIA_TIMEOUT_MS);
   for (const [index, item] of media.entries()) {
     if (index >= photoLimits.maxCount) {
       refused.push("too_many");
       continue;
     }
-    const fetched = await fetchMedia(config, item);
+    const fetched = await fetchMedia(config, item, deadline);
     if (!fetched.ok) {
       refused.push(fetched.reason);
       continue;
