@@ -24,6 +24,7 @@ import { calendarRoutes } from "./features/calendar/routes.ts";
 import { programRoutes } from "./features/programs/routes.ts";
 import { staffDayRoutes } from "./features/staff-day/routes.ts";
 import { homeownerViewRoutes } from "./features/homeowner-view/routes.ts";
+import { unmatchedInboundRoutes } from "./features/unmatched-inbound/routes.ts";
 
 /**
  * The server's whole API route table. The authorisation matrix test reads it, so a
@@ -44,6 +45,7 @@ export function collectRoutes(deps: AppDeps): RouteSpec[] {
     ...reminderRoutes(deps),
     ...preferencesRoutes(deps),
     ...smsWebhookRoutes(deps),
+    ...unmatchedInboundRoutes(deps.db),
     ...auditRoutes(deps.db),
     ...followUpRoutes(deps.db),
     ...callbackReportRoutes(deps.db),

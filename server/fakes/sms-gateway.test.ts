@@ -143,6 +143,46 @@ describe("fake SMS gateway, inbound texts", () => {
     expect(await posted.text()).toContain("The app answered with HTTP 200");
   });
 
+  it("sends media the way Twilio does: MediaUrlN behind HTTP Basic, signed with the rest", async () => {
+    const photo = Buffer.from([0xff, 0xd8, 0xff, 0xe0, 1, 2, 3, 4]);
+    const res = await fetch(`${gateway.url}/__inbound`, {
+      method: "POST",
+      headers: { "Content-Type": "application/json" },
+      body: JSON.stringify({ from: "+13305550123", body: "", media: [{ contentType: "image/jpeg", base64: photo.toString("base64") }, { contentType: "image/png", missing: true }] }),
+    });
+    expect(res.status).toBe(200);
+    const result = (await res.json()) as { messageSid: string; mediaUrls: string[] };
+    const [hook] = app.received;
+    expect(hook?.params).toMatchObject({ NumMedia: "2", Body: "", MediaContentType0: "image/jpeg", MediaContentType1: "image/png", MediaUrl0: result.mediaUrls[0], MediaUrl1: result.mediaUrls[1] });
+    expect(result.mediaUrls[0]).toMatch(new RegExp(`^${gateway.url}/2010-04-01/Accounts/${accountSid}/Messages/${result.messageSid}/Media/ME[0-9a-f]{32}$`));
+    expect(twilio.validateRequest(authToken, hook!.signature!, hook!.url, hook!.params)).toBe(true);
+
+    expect((await fetch(result.mediaUrls[0]!)).status).toBe(401);
+    const fetched = await fetch(result.mediaUrls[0]!, { headers: { Authorization: basic } });
+    expect(fetched.status).toBe(200);
+    expect(fetched.headers.get("content-type")).toBe("image/jpeg");
+    expect(Buffer.from(await fetched.arrayBuffer())).toEqual(photo);
+    expect((await fetch(result.mediaUrls[1]!, { headers: { Authorization: basic } })).status).toBe(404);
+  });
+
+  it("refuses a text with neither words nor media", async () => {
+    const res = await fetch(`${gateway.url}/__inbound`, { method: "POST", headers: { "Content-Type": "application/json" }, body: JSON.stringify({ from: "+13305550123", body: "" }) });
+    expect(res.status).toBe(400);
+    expect(app.received).toEqual([]);
+  });
+
+  it("the hand-operated form can attach the sample photo", async () => {
+    const form = new FormData();
+    form.append("from", "+13305550123");
+    form.append("to", "+15005550006");
+    form.append("body", "Look");
+    form.append("samplePhoto", "on");
+    const posted = await fetch(`${gateway.url}/__inbound`, { method: "POST", body: form });
+    expect(posted.status).toBe(200);
+    expect(await posted.text()).toContain("Photos attached: 1.");
+    expect(app.received[0]?.params).toMatchObject({ NumMedia: "1", MediaContentType0: "image/jpeg", Body: "Look" });
+  });
+
   it("says clearly when no inbound webhook URL is configured", async () => {
     gateway.setInboundWebhookUrl(null);
     const res = await fetch(`${gateway.url}/__inbound`, { method: "POST", headers: { "Content-Type": "application/json" }, body: JSON.stringify({ from: "+13305550123", body: "hi" }) });

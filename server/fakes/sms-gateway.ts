@@ -1,4 +1,5 @@
 import express, { type NextFunction, type Request, type Response } from "express";
+import multer from "multer";
 import { z } from "zod";
 import { parseBasicAuth } from "./basic-auth.ts";
 import { listenHttp } from "./http-listen.ts";
@@ -7,6 +8,7 @@ import { SmsFaultPolicy, isInvalidNumber, smsFaultSettingsSchema, type SmsFaultS
 import { deliverInbound, optOutChange, type InboundResult } from "./sms-inbound.ts";
 import { renderInboundForm, renderInboundResult } from "./sms-inbound-page.ts";
 import { listMessages } from "./sms-list.ts";
+import { MediaStore, samplePhoto, type FakeMedia } from "./sms-media.ts";
 import { SmsLog, type RecordedSms } from "./sms-log.ts";
 import { messageResource, newSid, TWILIO_API_VERSION, twilioError, type TwilioErrorBody } from "./twilio-format.ts";
 
@@ -41,7 +43,7 @@ export interface FakeSmsGateway {
   faults(): SmsFaultSettings;
   setFaults(patch: Partial<SmsFaultSettings>): SmsFaultSettings;
   setInboundWebhookUrl(url: string | null): void;
-  simulateInbound(text: { from: string; body: string; to?: string }): Promise<InboundResult>;
+  simulateInbound(text: InboundText): Promise<InboundResult>;
   stop(): Promise<void>;
 }
 
@@ -50,11 +52,27 @@ const controlPatchSchema = smsFaultSettingsSchema
   .extend({ inboundWebhookUrl: z.url().nullable().optional() })
   .strict();
 
-const inboundSchema = z.object({
-  from: z.string().trim().regex(/^\+[1-9]\d{6,14}$/, "from must be an E.164 number such as +15551234567"),
-  body: z.string().min(1, "body is required").max(1600),
-  to: z.string().trim().optional(),
-});
+/** A text a customer sends: words, photos (MMS), or both. */
+export type InboundText = { from: string; body: string; to?: string; media?: readonly FakeMedia[] };
+
+/** Twilio takes up to 10 attachments per MMS. */
+const MEDIA_LIMIT = 10;
+
+const inboundSchema = z
+  .object({
+    from: z.string().trim().regex(/^\+[1-9]\d{6,14}$/, "from must be an E.164 number such as +15551234567"),
+    body: z.string().max(1600).default(""),
+    to: z.string().trim().optional(),
+    // JSON callers: base64 bytes, or `missing: true` for media whose URL answers 404.
+    media: z
+      .array(z.object({ contentType: z.string().min(1), base64: z.string().optional(), missing: z.boolean().optional() }).strict())
+      .max(MEDIA_LIMIT)
+      .default([]),
+    samplePhoto: z.union([z.boolean(), z.literal("on")]).optional(),
+  });
+
+/** The hand-operated form's photo chooser: one file, as large as an MMS gets. */
+const formUpload = multer({ storage: multer.memoryStorage(), limits: { files: 1, fileSize: 5 * 1024 * 1024, fields: 5 } }).single("photo");
 
 /** Twilio refuses bodies longer than this (error 21617). */
 const BODY_LIMIT = 1600;
@@ -69,10 +87,12 @@ export async function startSmsGateway(options: SmsGatewayOptions): Promise<FakeS
   const faults = new SmsFaultPolicy(options.faults, options.random);
   const delivery = new DeliverySimulator(log, () => options.authToken, options.statusStepMs ?? 100);
   const optedOut = new Set<string>();
+  const mediaStore = new MediaStore();
+  let baseUrl = "";
 
   const sendError = (res: Response, error: TwilioErrorBody) => res.status(error.status).json(error);
 
-  const simulateInbound = async (text: { from: string; body: string; to?: string }) => {
+  const simulateInbound = async (text: InboundText) => {
     if (!inboundWebhookUrl) throw new InboundNotConfigured();
     const change = optOutChange(text.body);
     if (change === "opt-out") optedOut.add(text.from);
@@ -85,13 +105,17 @@ export async function startSmsGateway(options: SmsGatewayOptions): Promise<FakeS
       from: text.from,
       to: text.to || phoneNumber,
       body: text.body,
+      media: text.media,
+      mediaStore,
+      baseUrl,
     });
   };
 
   const app = express();
   app.disable("x-powered-by");
   app.use(express.urlencoded({ extended: false }));
-  app.use(express.json());
+  // Inbound texts from tests may carry photos as base64.
+  app.use(express.json({ limit: "20mb" }));
 
   // Everything under /2010-04-01 is the Twilio-shaped REST API: outage, latency and HTTP Basic auth first.
   const api = express.Router();
@@ -168,6 +192,12 @@ export async function startSmsGateway(options: SmsGatewayOptions): Promise<FakeS
     res.json(messageResource(message));
   });
 
+  api.get("/Accounts/:accountSid/Messages/:messageSid/Media/:mediaSid", (req, res) => {
+    const media = mediaStore.get(String(req.params.accountSid), String(req.params.messageSid), String(req.params.mediaSid));
+    if (!media) return void sendError(res, twilioError(404, 20404, "The requested resource was not found"));
+    res.type(media.contentType).send(media.data);
+  });
+
   app.use(`/${TWILIO_API_VERSION}`, api);
 
   // Test and development controls, outside the Twilio shape.
@@ -179,6 +209,7 @@ export async function startSmsGateway(options: SmsGatewayOptions): Promise<FakeS
   app.delete("/__messages", (_req, res) => {
     log.clear();
     optedOut.clear();
+    mediaStore.clear();
     res.status(204).end();
   });
   app.get("/__control", (_req, res) => {
@@ -195,9 +226,9 @@ export async function startSmsGateway(options: SmsGatewayOptions): Promise<FakeS
     const from = typeof req.query.from === "string" ? req.query.from : "";
     res.type("html").send(renderInboundForm({ to: phoneNumber, webhookUrl: inboundWebhookUrl, from }));
   });
-  app.post("/__inbound", async (req, res) => {
-    // The hand-operated form posts url-encoded and wants a page back; tests post JSON and want JSON.
-    const fromForm = Boolean(req.is("application/x-www-form-urlencoded"));
+  app.post("/__inbound", (req, res, next) => (req.is("multipart/form-data") ? formUpload(req, res, next) : next()), async (req, res) => {
+    // The hand-operated form posts a page form and wants a page back; tests post JSON and want JSON.
+    const fromForm = Boolean(req.is("application/x-www-form-urlencoded") || req.is("multipart/form-data"));
     const parsed = inboundSchema.safeParse(req.body ?? {});
     if (!parsed.success) {
       const message = z.prettifyError(parsed.error);
@@ -205,11 +236,16 @@ export async function startSmsGateway(options: SmsGatewayOptions): Promise<FakeS
       return void res.status(400).json({ error: message });
     }
     try {
-      const result = await simulateInbound(parsed.data);
+      const { media: described, samplePhoto: wantsSample, ...text } = parsed.data;
+      const media: FakeMedia[] = described.map((m) => ({ contentType: m.contentType, data: m.missing ? null : Buffer.from(m.base64 ?? "", "base64") }));
+      if (req.file) media.push({ contentType: req.file.mimetype || "application/octet-stream", data: req.file.buffer });
+      if (wantsSample) media.push(await samplePhoto());
+      if (!text.body && media.length === 0) throw new EmptyText();
+      const result = await simulateInbound({ ...text, media });
       if (fromForm) return void res.type("html").send(renderInboundResult(result, parsed.data.from));
       res.json(result);
     } catch (error) {
-      const status = error instanceof InboundNotConfigured ? 409 : 502;
+      const status = error instanceof InboundNotConfigured ? 409 : error instanceof EmptyText ? 400 : 502;
       const message = error instanceof Error ? error.message : String(error);
       if (fromForm) return void res.status(status).type("html").send(renderInboundForm({ to: phoneNumber, webhookUrl: inboundWebhookUrl, error: message }));
       res.status(status).json({ error: message });
@@ -225,6 +261,7 @@ export async function startSmsGateway(options: SmsGatewayOptions): Promise<FakeS
   });
 
   const running = await listenHttp(app, options.port ?? 0, options.host ?? "127.0.0.1");
+  baseUrl = running.url;
   return {
     url: running.url,
     port: running.port,
@@ -233,6 +270,7 @@ export async function startSmsGateway(options: SmsGatewayOptions): Promise<FakeS
     clear: () => {
       log.clear();
       optedOut.clear();
+      mediaStore.clear();
     },
     faults: () => faults.current(),
     setFaults: (patch) => faults.update(patch),
@@ -245,6 +283,12 @@ export async function startSmsGateway(options: SmsGatewayOptions): Promise<FakeS
       await running.close();
     },
   };
+}
+
+class EmptyText extends Error {
+  constructor() {
+    super("A text needs a body or a photo.");
+  }
 }
 
 class InboundNotConfigured extends Error {

@@ -15,13 +15,16 @@ export function renderInboundForm(options: { to: string; webhookUrl: string | nu
     `<h1>Text the app as a customer</h1>
 ${target}
 ${error}
-<form method="post" action="/__inbound">
+<form method="post" action="/__inbound" enctype="multipart/form-data">
   <label for="from">Customer's mobile number</label>
   <input id="from" name="from" type="tel" required autocomplete="off" placeholder="+15551234567" value="${escapeHtml(options.from ?? "")}">
   <label for="to">Our number</label>
   <input id="to" name="to" type="tel" required value="${escapeHtml(options.to)}">
   <label for="body">Message</label>
-  <textarea id="body" name="body" rows="4" required></textarea>
+  <textarea id="body" name="body" rows="4"></textarea>
+  <label for="photo">Photo (optional, sent as MMS media)</label>
+  <input id="photo" name="photo" type="file" accept="image/*">
+  <label><input name="samplePhoto" type="checkbox" value="on"> Attach a sample lawn photo (JPEG with camera and GPS metadata)</label>
   <p><button class="primary" type="submit">Send text</button></p>
 </form>
 <p><a href="/__messages">See every recorded message (JSON)</a></p>`,
@@ -37,6 +40,7 @@ export function renderInboundResult(result: InboundResult, from: string): string
     BANNER,
     `<h1>Text sent</h1>
 <p role="status">The app answered with HTTP ${result.webhookStatus}.</p>
+<p>Photos attached: ${result.mediaUrls.length}.</p>
 <h2>Reply texts</h2>
 ${replies}
 <h2>What the app sent back</h2>

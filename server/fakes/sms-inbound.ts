@@ -1,5 +1,6 @@
 import { postSignedWebhook } from "./signed-webhook.ts";
 import type { RecordedSms, SmsLog } from "./sms-log.ts";
+import type { FakeMedia, MediaStore } from "./sms-media.ts";
 import { newSid, TWILIO_API_VERSION } from "./twilio-format.ts";
 
 /** Keywords Twilio's default opt-out handling acts on (case-insensitive, whole message). */
@@ -20,6 +21,8 @@ export interface InboundResult {
   webhookContentType: string | null;
   /** The app's answer as it sent it, normally TwiML. */
   twiml: string;
+  /** MediaUrlN as posted: where the app had to fetch the photos (behind HTTP Basic). */
+  mediaUrls: string[];
   /** Replies the app asked for with <Message> in its TwiML; the fake records them as sent. */
   replies: string[];
 }
@@ -57,8 +60,14 @@ export async function deliverInbound(options: {
   from: string;
   to: string;
   body: string;
+  /** Attachments (MMS): hosted by the fake at Twilio-shaped URLs and announced as MediaUrlN. */
+  media?: readonly FakeMedia[];
+  mediaStore?: MediaStore;
+  /** The fake's own URL, where the media is hosted. */
+  baseUrl?: string;
 }): Promise<InboundResult> {
   const { log, webhookUrl, accountSid, authToken, from, to, body } = options;
+  const media = options.media ?? [];
   const now = new Date().toISOString();
   const inbound: RecordedSms = {
     sid: newSid("SM"),
@@ -82,13 +91,20 @@ export async function deliverInbound(options: {
     Body: body,
     From: from,
     MessageSid: inbound.sid,
-    NumMedia: "0",
+    NumMedia: String(media.length),
     NumSegments: "1",
     SmsMessageSid: inbound.sid,
     SmsSid: inbound.sid,
     SmsStatus: "received",
     To: to,
   };
+  if (media.length > 0) {
+    if (!options.mediaStore || !options.baseUrl) throw new Error("Media needs a media store and the fake's base URL.");
+    for (const [i, item] of media.entries()) {
+      params[`MediaUrl${i}`] = options.mediaStore.host(options.baseUrl, accountSid, inbound.sid, item);
+      params[`MediaContentType${i}`] = item.contentType;
+    }
+  }
   const answer = await postSignedWebhook(webhookUrl, params, authToken);
   const replies = answer.status >= 200 && answer.status < 300 ? twimlReplies(answer.body) : [];
   for (const reply of replies) {
@@ -101,6 +117,7 @@ export async function deliverInbound(options: {
     webhookStatus: answer.status,
     webhookContentType: answer.contentType,
     twiml: answer.body,
+    mediaUrls: media.map((_m, i) => params[`MediaUrl${i}`]!),
     replies,
   };
 }

@@ -6,7 +6,7 @@ import type { RecordedSms } from "./sms-log.ts";
 export const TWILIO_API_VERSION = "2010-04-01";
 
 /** Twilio sids are a two-letter prefix plus 32 lowercase hex characters. */
-export function newSid(prefix: "SM" | "MM"): string {
+export function newSid(prefix: "SM" | "MM" | "ME"): string {
   return prefix + randomBytes(16).toString("hex");
 }
 

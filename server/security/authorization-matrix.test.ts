@@ -31,11 +31,13 @@ async function makeStaffRecords() {
   const manager = await ctx.db("users").where({ email: "dana@cobblefield.example" }).first<{ id: number }>("id");
   const [followUp] = await ctx.db("follow_up_visits").insert({ property_id: records.own.id, plan_id: records.own.planId, reason: "other", created_by: manager!.id }).returning<{ id: number }[]>("id");
   const [reply] = await ctx.db("saved_replies").insert({ company_id: ruth!.company_id, title: `matrix ${Date.now()}`, body: "Hello {{firstName}}" }).returning<{ id: number }[]>("id");
+  // A stranger's text, kept for managers; marking it handled twice is harmless.
+  const [unmatched] = await ctx.db("unmatched_inbound").insert({ company_id: ruth!.company_id, channel: "sms", sender: "+13305550177", body: "matrix" }).returning<{ id: string }[]>("id");
   const [batch] = await ctx.db("import_batches").insert({ company_id: ruth!.company_id, file_sha256: `matrix ${Date.now()}` }).returning<{ id: number }[]>("id");
   // Ruth's open question (asked in photoOf); assigning it to nobody changes nothing.
   const question = await ctx.db("messages").join("conversations", "conversations.id", "messages.conversation_id")
     .where({ "conversations.plan_id": records.own.planId, "messages.kind": "question" }).whereNull("messages.resolved_at").orderBy("messages.id").first<{ id: string }>("messages.id");
-  Object.assign(staffRecordIds, { "questions:messageId": Number(question!.id), "follow-ups:id": followUp!.id, "customers:id": ruth!.id, "saved-replies:id": reply!.id, "team:userId": manager!.id, "visit-imports:batchId": batch!.id });
+  Object.assign(staffRecordIds, { "questions:messageId": Number(question!.id), "follow-ups:id": followUp!.id, "customers:id": ruth!.id, "saved-replies:id": reply!.id, "team:userId": manager!.id, "visit-imports:batchId": batch!.id, "unmatched-inbound:id": Number(unmatched!.id) });
 }
 
 /** Each homeowner asks a question with one photo, so photo routes have a record of each. */

@@ -57,6 +57,8 @@ export const authorizationMatrix: Record<string, MatrixRow> = {
   "POST /api/unsubscribe/email": publicRoute,
   "POST /api/webhooks/sms/inbound": signedWebhook,
   "POST /api/webhooks/sms/status": signedWebhook,
+  "GET /api/unmatched-inbound": managerOnly,
+  "POST /api/unmatched-inbound/:id/handled": managerOnly,
   "GET /api/questions/open": staffOnly,
   "GET /api/questions/answered": staffOnly,
   "POST /api/questions/:messageId/assign": staffOnly,

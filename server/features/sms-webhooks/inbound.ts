@@ -2,34 +2,20 @@ import type { Db } from "../../db.ts";
 import { localDateAt } from "../../lib/local-date.ts";
 import { optIn, optOut } from "../preferences/repo.ts";
 import { reconcileCustomerReminders, reconcilePlanReminders } from "../reminders/reconcile.ts";
-import { keywordOf } from "./keywords.ts";
+import { keywordOf, type Keyword } from "./keywords.ts";
+import type { InboundMedia } from "./media.ts";
 import { replies } from "./replies.ts";
+import { currentPlanId, fallbackCompany, findTexter, insertUnmatched, textAlreadyFiled, unmatchedRecently, type Company, type Texter } from "./repo.ts";
+import { fileTextedQuestion, type InboundDeps } from "./texted-question.ts";
 
-type Texter = { customerId: number; userId: number; senderName: string; companyName: string };
-
-/** The customer whose mobile number texted us (numbers are unique across users, stored in E.164). */
-async function findTexter(db: Db, phone: string): Promise<Texter | undefined> {
-  const row = await db("users")
-    .join("customers", "customers.user_id", "users.id")
-    .join("companies", "companies.id", "customers.company_id")
-    .where({ "users.phone": phone, "users.role": "customer" })
-    .first<{ customer_id: number; user_id: number; sms_sender_name: string; name: string } | undefined>(
-      "customers.id as customer_id",
-      "users.id as user_id",
-      "companies.sms_sender_name",
-      "companies.name",
-    );
-  return row && { customerId: row.customer_id, userId: row.user_id, senderName: row.sms_sender_name, companyName: row.name };
-}
+export type InboundText = { from: string; body: string; messageSid: string | null; media: readonly InboundMedia[] };
 
 /**
- * A number we don't know still gets an answer to STOP and HELP, in the name of the company
- * this deployment (and so its SMS number) serves: the oldest, as GET /api/company has it.
+ * A number that isn't matched to a plan gets one reply per this many hours, however many texts
+ * it sends: enough to tell a person how to reach the office, never a conversation with a bot
+ * (or with another automated sender that answers every text).
  */
-async function fallbackSender(db: Db): Promise<{ senderName: string; companyName: string }> {
-  const company = await db("companies").orderBy("id").first<{ sms_sender_name: string; name: string } | undefined>("sms_sender_name", "name");
-  return company ? { senderName: company.sms_sender_name, companyName: company.name } : { senderName: "Sproutline", companyName: "your lawn care company" };
-}
+export const UNMATCHED_REPLY_HOURS = 24;
 
 /** Marks today's pending watering steps done on every active plan of the customer; returns how many. */
 async function markTodaysWateringDone(db: Db, texter: Texter): Promise<number> {
@@ -53,12 +39,9 @@ async function markTodaysWateringDone(db: Db, texter: Texter): Promise<number> {
   });
 }
 
-/** Handles one inbound text and returns the reply texts (possibly none). */
-export async function handleInboundText(db: Db, from: string, body: string): Promise<string[]> {
-  const keyword = keywordOf(body);
-  if (!keyword) return [];
+async function handleKeyword(db: Db, from: string, keyword: Keyword): Promise<string[]> {
   const texter = await findTexter(db, from);
-  const { senderName, companyName } = texter ?? (await fallbackSender(db));
+  const { senderName, companyName } = texter ?? (await fallbackCompany(db));
   switch (keyword) {
     case "stop":
       if (texter) {
@@ -81,4 +64,44 @@ export async function handleInboundText(db: Db, from: string, body: string): Pro
     case "done":
       return texter ? [replies.done(senderName, await markTodaysWateringDone(db, texter))] : [];
   }
+}
+
+/**
+ * Keeps a text we can't file on a plan for managers, and answers it at most once a day per number.
+ * A repeated webhook (same MessageSid) is neither kept twice nor answered twice.
+ */
+async function keepUnmatched(db: Db, text: InboundText, company: Company, reply: string): Promise<string[]> {
+  return db.transaction(async (trx) => {
+    // Two texts from one number arriving together (several server processes) still get one reply.
+    await trx.raw("select pg_advisory_xact_lock(hashtext(?))", [`unmatched-sms:${text.from}`]);
+    const id = await insertUnmatched(trx, { companyId: company.companyId, sender: text.from, body: text.body.trim(), mediaCount: text.media.length, messageSid: text.messageSid });
+    if (id === undefined) return [];
+    return (await unmatchedRecently(trx, text.from, id, UNMATCHED_REPLY_HOURS)) ? [] : [reply];
+  });
+}
+
+/**
+ * Handles one inbound text and returns the reply texts (possibly none). Keywords come first,
+ * whoever sends them. Other texts from a customer become a question on their current plan;
+ * from a customer with no active plan, or from a number we don't know, they are kept as
+ * unmatched for managers, with a reply that says how to reach the office.
+ */
+export async function handleInboundText(deps: InboundDeps, text: InboundText): Promise<string[]> {
+  const keyword = keywordOf(text.body);
+  if (keyword) return handleKeyword(deps.db, text.from, keyword);
+  if (!text.body.trim() && text.media.length === 0) return [];
+  if (text.messageSid && (await textAlreadyFiled(deps.db, text.messageSid))) return [];
+
+  const texter = await findTexter(deps.db, text.from);
+  if (!texter) {
+    const company = await fallbackCompany(deps.db);
+    return keepUnmatched(deps.db, text, company, replies.unknownNumber(company.senderName, company.companyName, company.companyPhone));
+  }
+  const planId = await currentPlanId(deps.db, texter.customerId);
+  if (planId === undefined) {
+    return keepUnmatched(deps.db, text, texter, replies.noActivePlan(texter.senderName, texter.companyPhone));
+  }
+  const filed = await fileTextedQuestion(deps, texter, planId, text);
+  if (filed.refused.length > 0) return [replies.photoRefused(texter.senderName, filed.stored, filed.refused)];
+  return filed.stored ? [replies.received(texter.senderName, filed.photos)] : [];
 }

@@ -1,12 +1,14 @@
 import { z } from "zod";
 import type { AppDeps } from "../../app.ts";
 import { route, type RouteSpec } from "../../http/route.ts";
+import { photoStorageFromConfig, type PhotoStorage } from "../../storage/index.ts";
 import { handleInboundText } from "./inbound.ts";
+import { mediaOfWebhook } from "./media.ts";
 import { twimlReply } from "./replies.ts";
 import { requireTwilioSignature } from "./signature.ts";
 import { applyStatusCallback } from "./status.ts";
 
-const inboundSchema = z.looseObject({ From: z.string().min(1), Body: z.string().default("") });
+const inboundSchema = z.looseObject({ From: z.string().min(1), Body: z.string().default(""), MessageSid: z.string().min(1).optional(), NumMedia: z.string().optional() });
 const statusSchema = z.looseObject({ MessageSid: z.string().min(1), MessageStatus: z.string().min(1), ErrorCode: z.string().optional() });
 const statusQuerySchema = z.looseObject({ reminder: z.coerce.number().int().positive().optional() });
 
@@ -14,8 +16,9 @@ const statusQuerySchema = z.looseObject({ reminder: z.coerce.number().int().posi
  * Twilio's webhooks. Public (Twilio has no session), but every request must carry a valid
  * X-Twilio-Signature for PUBLIC_URL + path, checked before anything else.
  */
-export function smsWebhookRoutes(deps: AppDeps): RouteSpec[] {
+export function smsWebhookRoutes(deps: AppDeps, storage: PhotoStorage = photoStorageFromConfig(deps.config)): RouteSpec[] {
   const signed = requireTwilioSignature(deps.config);
+  const inbound = { db: deps.db, config: deps.config, storage };
   return [
     route({
       method: "post",
@@ -24,7 +27,7 @@ export function smsWebhookRoutes(deps: AppDeps): RouteSpec[] {
       before: [signed],
       body: inboundSchema,
       handler: async ({ body, res }) => {
-        const texts = await handleInboundText(deps.db, body.From.trim(), body.Body);
+        const texts = await handleInboundText(inbound, { from: body.From.trim(), body: body.Body, messageSid: body.MessageSid ?? null, media: mediaOfWebhook(body) });
         res.type("text/xml").send(twimlReply(...texts));
       },
     }),

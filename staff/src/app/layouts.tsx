@@ -16,6 +16,7 @@ export function PublicLayout() {
 /** Manager screens; technicians don't see them in the navigation. */
 const managerNav: NavItem[] = [
   { to: "/follow-ups", label: "Follow-ups" },
+  { to: "/unmatched", label: "Unmatched messages" },
   { to: "/reports/callbacks", label: "Callback report" },
   { to: "/programs", label: "Programs" },
   { to: "/team", label: "Team" },

@@ -12,6 +12,8 @@ const actionLabels: Record<string, string> = {
   "visit.moved": "Moved a visit",
   "follow_up.created": "Booked a follow-up visit",
   "follow_up.updated": "Changed a follow-up visit",
+  "unmatched_inbound.read": "Read the unmatched messages",
+  "unmatched_inbound.handled": "Marked an unmatched message handled",
 };
 export const actionLabel = (action: string) => actionLabels[action] ?? action;
 
