@@ -22,6 +22,7 @@ import { questionRoutes } from "./features/questions/routes.ts";
 import { photoRoutes } from "./features/photos/routes.ts";
 import { calendarRoutes } from "./features/calendar/routes.ts";
 import { programRoutes } from "./features/programs/routes.ts";
+import { unreadRoutes } from "./features/unread/routes.ts";
 
 /**
  * The server's whole API route table. The authorisation matrix test reads it, so a
@@ -30,12 +31,13 @@ import { programRoutes } from "./features/programs/routes.ts";
 export function collectRoutes(deps: AppDeps): RouteSpec[] {
   return [
     ...healthRoutes(deps.db),
-    ...companyRoutes(deps.db),
+    ...companyRoutes(deps),
     ...authRoutes(deps),
     ...propertyRoutes(deps.db),
     ...planRoutes(deps, reminderPlanHook),
     ...visitRoutes(deps, reminderPlanHook),
     ...questionRoutes(deps),
+    ...unreadRoutes(deps.db),
     ...photoRoutes(deps),
     ...calendarRoutes(deps),
     ...programRoutes(deps.db),
