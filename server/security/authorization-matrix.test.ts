@@ -58,7 +58,7 @@ beforeAll(async () => {
   agents.manager = await signInStaff(ctx, "dana@cobblefield.example");
   agents.deactivated = await signInStaff(ctx, "priya@cobblefield.example");
   // The public logo route has something to serve.
-  await agents.manager.put("/api/company/logo").attach("logo", await smallWebp(), "logo.webp").expect(200);
+  await agents.manager.post("/api/company/logo").attach("logo", await smallWebp(), "logo.webp").expect(200);
   await ctx.db("users").where({ email: "priya@cobblefield.example" }).update({ active: false });
 });
 afterAll(async () => {

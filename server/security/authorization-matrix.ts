@@ -28,7 +28,7 @@ export const authorizationMatrix: Record<string, MatrixRow> = {
   "GET /api/health": publicRoute,
   "GET /api/company": publicRoute,
   "PATCH /api/company": managerOnly,
-  "PUT /api/company/logo": managerOnly,
+  "POST /api/company/logo": managerOnly,
   // E-mails and the printed plan show the logo with no session (the matrix test uploads one first).
   "GET /api/companies/:companyId/logo": publicRoute,
   "GET /api/my/unread": customerOnly,

@@ -78,18 +78,18 @@ describe("the company's logo", () => {
   });
 
   it("refuses a text file renamed .png and stores nothing", async () => {
-    const res = await dana.put("/api/company/logo").attach("logo", Buffer.from("Cobblefield Turf Care\nnot an image at all\n"), { filename: "logo.png", contentType: "image/png" }).expect(415);
+    const res = await dana.post("/api/company/logo").attach("logo", Buffer.from("Cobblefield Turf Care\nnot an image at all\n"), { filename: "logo.png", contentType: "image/png" }).expect(415);
     expect(res.body.error.code).toBe("unsupported_type");
     expect(await storedFiles()).toEqual([]);
     expect((await company(dana)).logoUrl).toBeNull();
   });
 
   it("refuses a request without a file", async () => {
-    await dana.put("/api/company/logo").expect(400);
+    await dana.post("/api/company/logo").expect(400);
   });
 
   it("is re-encoded to a bounded PNG without metadata and served publicly with the right headers", async () => {
-    const res = await dana.put("/api/company/logo").attach("logo", await jpegWithGps(3000, 2000), "logo.jpg").expect(200);
+    const res = await dana.post("/api/company/logo").attach("logo", await jpegWithGps(3000, 2000), "logo.jpg").expect(200);
     const logoUrl = publicCompanyResponseSchema.parse(res.body).company.logoUrl;
     expect(logoUrl).toMatch(new RegExp(`^/api/companies/${companyId}/logo\\?v=\\d+$`));
     expect((await company(ruth)).logoUrl).toBe(logoUrl);
@@ -112,7 +112,7 @@ describe("the company's logo", () => {
   it("replaces the previous file when a new logo is uploaded, under a new URL", async () => {
     const before = (await company(dana)).logoUrl;
     const small = await smallPng();
-    const res = await dana.put("/api/company/logo").attach("logo", small, "new-logo.png").expect(200);
+    const res = await dana.post("/api/company/logo").attach("logo", small, "new-logo.png").expect(200);
     const after = publicCompanyResponseSchema.parse(res.body).company.logoUrl;
     expect(after).not.toBe(before);
     // A small logo is kept at its own size, not blown up.
@@ -128,9 +128,9 @@ describe("the company's logo", () => {
 
   it("is uploaded by managers only", async () => {
     const png = await smallPng();
-    await marco.put("/api/company/logo").attach("logo", png, "logo.png").expect(403);
-    await ruth.put("/api/company/logo").attach("logo", png, "logo.png").expect(403);
-    await request(ctx.app).put("/api/company/logo").attach("logo", png, "logo.png").expect(401);
+    await marco.post("/api/company/logo").attach("logo", png, "logo.png").expect(403);
+    await ruth.post("/api/company/logo").attach("logo", png, "logo.png").expect(403);
+    await request(ctx.app).post("/api/company/logo").attach("logo", png, "logo.png").expect(401);
   });
 
   it("answers 404 for a company that does not exist", async () => {

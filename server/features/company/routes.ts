@@ -62,7 +62,7 @@ export function companyRoutes(deps: Pick<AppDeps, "config" | "db">, storage: Pho
       },
     }),
     route({
-      method: "put",
+      method: "post",
       path: "/api/company/logo",
       access: managers,
       before: [logoUpload()],
