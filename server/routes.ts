@@ -25,6 +25,7 @@ import { programRoutes } from "./features/programs/routes.ts";
 import { staffDayRoutes } from "./features/staff-day/routes.ts";
 import { homeownerViewRoutes } from "./features/homeowner-view/routes.ts";
 import { unmatchedInboundRoutes } from "./features/unmatched-inbound/routes.ts";
+import { unreadRoutes } from "./features/unread/routes.ts";
 
 /**
  * The server's whole API route table. The authorisation matrix test reads it, so a
@@ -33,12 +34,13 @@ import { unmatchedInboundRoutes } from "./features/unmatched-inbound/routes.ts";
 export function collectRoutes(deps: AppDeps): RouteSpec[] {
   return [
     ...healthRoutes(deps.db),
-    ...companyRoutes(deps.db),
+    ...companyRoutes(deps),
     ...authRoutes(deps),
     ...propertyRoutes(deps.db),
     ...planRoutes(deps, reminderPlanHook),
     ...visitRoutes(deps, reminderPlanHook),
     ...questionRoutes(deps),
+    ...unreadRoutes(deps.db),
     ...photoRoutes(deps),
     ...calendarRoutes(deps),
     ...programRoutes(deps.db),

@@ -8,6 +8,8 @@ export const demoCompany = {
   time_zone: "America/New_York",
   sms_sender_name: "Cobblefield Turf",
   answer_target_hours: 24,
+  // The office line homeowners tap to call or text.
+  phone: "+13305550100",
 };
 
 export const demoTown = { town: "Wrenmoor", region: "OH", time_zone: "America/New_York" };

@@ -37,7 +37,7 @@ async function makeStaffRecords() {
   // Ruth's open question (asked in photoOf); assigning it to nobody changes nothing.
   const question = await ctx.db("messages").join("conversations", "conversations.id", "messages.conversation_id")
     .where({ "conversations.plan_id": records.own.planId, "messages.kind": "question" }).whereNull("messages.resolved_at").orderBy("messages.id").first<{ id: string }>("messages.id");
-  Object.assign(staffRecordIds, { "questions:messageId": Number(question!.id), "follow-ups:id": followUp!.id, "customers:id": ruth!.id, "saved-replies:id": reply!.id, "team:userId": manager!.id, "visit-imports:batchId": batch!.id, "unmatched-inbound:id": Number(unmatched!.id) });
+  Object.assign(staffRecordIds, { "companies:companyId": ruth!.company_id, "questions:messageId": Number(question!.id), "follow-ups:id": followUp!.id, "customers:id": ruth!.id, "saved-replies:id": reply!.id, "team:userId": manager!.id, "visit-imports:batchId": batch!.id, "unmatched-inbound:id": Number(unmatched!.id) });
 }
 
 /** Each homeowner asks a question with one photo, so photo routes have a record of each. */
@@ -59,6 +59,8 @@ beforeAll(async () => {
   agents.technician = await signInStaff(ctx, "marco@cobblefield.example");
   agents.manager = await signInStaff(ctx, "dana@cobblefield.example");
   agents.deactivated = await signInStaff(ctx, "priya@cobblefield.example");
+  // The public logo route has something to serve.
+  await agents.manager.post("/api/company/logo").attach("logo", await smallWebp(), "logo.webp").expect(200);
   await ctx.db("users").where({ email: "priya@cobblefield.example" }).update({ active: false });
 });
 afterAll(async () => {

@@ -27,6 +27,11 @@ const ownRecordOnly: MatrixRow = { signedOut: 401, customerOwn: "ok", customerOt
 export const authorizationMatrix: Record<string, MatrixRow> = {
   "GET /api/health": publicRoute,
   "GET /api/company": publicRoute,
+  "PATCH /api/company": managerOnly,
+  "POST /api/company/logo": managerOnly,
+  // E-mails and the printed plan show the logo with no session (the matrix test uploads one first).
+  "GET /api/companies/:companyId/logo": publicRoute,
+  "GET /api/my/unread": customerOnly,
   "GET /api/me": anyoneSignedIn,
   "POST /api/auth/link": publicRoute,
   "POST /api/auth/link/consume": publicRoute,

@@ -9,6 +9,9 @@ import { PortalSignOutButton } from "../common/components/sign-out-button.tsx";
 import { applyLanguage } from "../i18n/index.ts";
 import { setUnits } from "../common/lib/units.ts";
 import { whenSettled } from "../common/lib/when-idle.ts";
+import { useCompany } from "../common/api/get-company.ts";
+import { useUnread } from "../common/api/get-unread.ts";
+import { CompanyBrand, OfficeContact } from "./company-brand.tsx";
 import { PortalShell } from "./portal-shell.tsx";
 
 /** Sign-in pages: no navigation and no account controls. */
@@ -23,10 +26,18 @@ export function PublicLayout() {
 /** Pages behind sign-in: navigation, sign out, and the homeowner's saved language. */
 export function SignedInLayout() {
   const { data: user } = useMe();
-  useSavedDisplayChoices(user?.role === "customer");
+  const isCustomer = user?.role === "customer";
+  useSavedDisplayChoices(isCustomer);
   usePrefetchReadingScreens();
+  const { data: company } = useCompany(Boolean(user));
+  const { data: unread } = useUnread(isCustomer);
   return (
-    <PortalShell actions={user ? <PortalSignOutButton /> : undefined}>
+    <PortalShell
+      actions={user ? <PortalSignOutButton /> : undefined}
+      brand={company ? <CompanyBrand company={company} /> : undefined}
+      headerStrip={isCustomer ? <OfficeContact company={company} /> : undefined}
+      unreadMessages={unread?.total ?? 0}
+    >
       <NavigationProgress />
       <Outlet />
     </PortalShell>

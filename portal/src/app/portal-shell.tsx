@@ -18,6 +18,12 @@ export interface PortalShellProps {
   actions?: ReactNode;
   /** False on the sign-in pages: there is nowhere to go yet. */
   showNav?: boolean;
+  /** The homeowner's company (logo and name) in place of the product's mark, once known. */
+  brand?: ReactNode;
+  /** A strip under the header (the office's call and text links). */
+  headerStrip?: ReactNode;
+  /** New messages from the company, shown on the Messages tab. */
+  unreadMessages?: number;
   children: ReactNode;
 }
 
@@ -25,7 +31,7 @@ export interface PortalShellProps {
  * The homeowner's frame. On a phone the five places sit in a bar at the bottom, where a
  * thumb reaches them; from tablet width they move into the header.
  */
-export function PortalShell({ actions, showNav = true, children }: PortalShellProps) {
+export function PortalShell({ actions, showNav = true, brand, headerStrip, unreadMessages = 0, children }: PortalShellProps) {
   const { t } = useTranslation();
   const mainRef = useFocusMainOnNavigate();
 
@@ -35,13 +41,18 @@ export function PortalShell({ actions, showNav = true, children }: PortalShellPr
         <NavLink
           to={to}
           end={end}
+          // The badge is drawn for the eye; the name says it for screen readers ("Messages, 2 new").
+          aria-label={key === "messages" && unreadMessages > 0 ? t("nav.messagesUnread", { count: unreadMessages }) : undefined}
           className={
             placement === "bottom"
               ? "flex min-h-14 flex-col items-center justify-center gap-0.5 px-1 text-sm font-semibold text-ink no-underline aria-[current=page]:bg-pine-100 aria-[current=page]:text-pine-900"
               : "flex min-h-11 items-center gap-2 rounded-lg px-3 font-semibold text-ink no-underline hover:bg-pine-50 aria-[current=page]:bg-pine-100 aria-[current=page]:text-pine-900"
           }
         >
-          <Icon />
+          <span className="relative">
+            <Icon />
+            {key === "messages" && unreadMessages > 0 && <UnreadBadge count={unreadMessages} />}
+          </span>
           {t(`nav.${key}`)}
         </NavLink>
       </li>
@@ -57,17 +68,22 @@ export function PortalShell({ actions, showNav = true, children }: PortalShellPr
       </a>
       <header className="border-b border-line bg-surface print:hidden">
         <div className="mx-auto flex max-w-5xl items-center gap-4 px-4 py-2">
-          <Link to="/" className="flex min-h-11 items-center gap-2 font-heading text-xl font-bold text-pine-900 no-underline">
-            <SproutMark />
-            {productLabel}
+          <Link to="/" className="flex min-h-11 min-w-0 items-center gap-2 font-heading text-xl font-bold text-pine-900 no-underline">
+            {brand ?? (
+              <>
+                <SproutMark />
+                {productLabel}
+              </>
+            )}
           </Link>
           {showNav && (
             <nav aria-label={t("shell.navLabel")} className="hidden flex-1 md:block">
               <ul className="flex gap-1">{links("top")}</ul>
             </nav>
           )}
-          {actions && <div className="ml-auto flex items-center gap-2">{actions}</div>}
+          {actions && <div className="ml-auto flex shrink-0 items-center gap-2">{actions}</div>}
         </div>
+        {headerStrip}
       </header>
 
       <main
@@ -86,6 +102,19 @@ export function PortalShell({ actions, showNav = true, children }: PortalShellPr
         </nav>
       )}
     </div>
+  );
+}
+
+/** A small count on the Messages icon; hidden from screen readers, the link's name carries it. */
+function UnreadBadge({ count }: { count: number }) {
+  return (
+    <span
+      aria-hidden="true"
+      data-testid="unread-badge"
+      className="absolute -top-1.5 -right-2.5 min-w-5 rounded-full bg-rust-700 px-1 text-center text-xs leading-5 font-bold text-white"
+    >
+      {count > 9 ? "9+" : count}
+    </span>
   );
 }
 

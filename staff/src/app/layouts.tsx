@@ -20,6 +20,7 @@ const managerNav: NavItem[] = [
   { to: "/reports/callbacks", label: "Callback report" },
   { to: "/programs", label: "Programs" },
   { to: "/team", label: "Team" },
+  { to: "/company", label: "Company profile" },
   { to: "/import", label: "Import" },
   { to: "/audit", label: "Audit log" },
 ];

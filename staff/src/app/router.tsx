@@ -72,6 +72,10 @@ export const router = createBrowserRouter(
                     },
                     { path: "programs", lazy: () => import("../features/programs/programs-route.tsx").then((m) => ({ Component: m.ProgramsRoute })) },
                     { path: "team", lazy: () => import("../features/team/team-route.tsx").then((m) => ({ Component: m.TeamRoute })) },
+                    {
+                      path: "company",
+                      lazy: () => import("../features/company-profile/company-profile-route.tsx").then((m) => ({ Component: m.CompanyProfileRoute })),
+                    },
                     { path: "import", lazy: () => import("../features/visit-import/visit-import-route.tsx").then((m) => ({ Component: m.VisitImportRoute })) },
                     { path: "unmatched", lazy: () => import("../features/unmatched-inbound/unmatched-inbound-route.tsx").then((m) => ({ Component: m.UnmatchedInboundRoute })) },
                     { path: "audit", lazy: () => import("../features/audit-log/audit-log-route.tsx").then((m) => ({ Component: m.AuditLogRoute })) },

@@ -9,10 +9,16 @@ export const portalKeys = {
   thread: (planId: number) => ["threads", planId] as const,
   preferences: ["preferences"] as const,
   calendarFeed: ["calendar-feed"] as const,
+  company: ["company"] as const,
+  unread: ["unread"] as const,
 };
 
-/** Answers the portal keeps on the device for offline reading (plus "me", to get past the sign-in check). */
-export const offlineReadableRoots = new Set(["plans", "threads", "session"]);
+/**
+ * Answers the portal keeps on the device for offline reading (plus "me", to get past the sign-in check).
+ * The company (name, phone, logo address) is kept so the header still says who to call in the
+ * garden. The unread count is not: a saved count would still announce answers read since.
+ */
+export const offlineReadableRoots = new Set(["plans", "threads", "session", "company"]);
 
 /** A week covers the life of a paused phone; older plans would mislead more than help. */
 export const offlineMaxAgeMs = 7 * 24 * 60 * 60 * 1000;

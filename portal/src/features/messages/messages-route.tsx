@@ -3,7 +3,10 @@ import { useTranslation } from "react-i18next";
 import { Link, useLocation } from "react-router-dom";
 import type { PhotoRef, ThreadResponse } from "#shared/schemas/questions";
 import { EmptyState, ErrorState, Notice, Page, buttonClasses } from "#shared/ui/index";
+import { useQueryClient } from "@tanstack/react-query";
 import { useThread } from "../../common/api/get-thread.ts";
+import { useUnread } from "../../common/api/get-unread.ts";
+import { portalKeys } from "../../common/api/query-keys.ts";
 import { OfflineNotice } from "../../common/components/offline-notice.tsx";
 import { PlanSwitcher } from "../../common/components/plan-switcher.tsx";
 import { QueryFallback } from "../../common/components/query-fallback.tsx";
@@ -53,6 +56,7 @@ export function MessagesRoute() {
 function PlanThread({ planId }: { planId: number }) {
   const { t } = useTranslation();
   const threadQuery = useThread(planId);
+  useFetchNewAnswers(planId);
   if (!threadQuery.data) {
     if (isNotFound(threadQuery.error)) {
       return <ErrorState title={t("messages.loadError")} error={threadQuery.error} message={t("messages.notAvailable")} />;
@@ -65,6 +69,19 @@ function PlanThread({ planId }: { planId: number }) {
       <Thread thread={threadQuery.data} />
     </>
   );
+}
+
+/**
+ * The count says there is news this thread hasn't shown yet (it came in while Messages was
+ * open, or the copy in memory is from a minute ago): fetch the thread, which also marks it read.
+ */
+function useFetchNewAnswers(planId: number) {
+  const queryClient = useQueryClient();
+  const { data } = useUnread();
+  const unread = data?.plans.find((p) => p.planId === planId)?.unread ?? 0;
+  useEffect(() => {
+    if (unread > 0) void queryClient.invalidateQueries({ queryKey: portalKeys.thread(planId) });
+  }, [queryClient, planId, unread]);
 }
 
 function Thread({ thread }: { thread: ThreadResponse }) {

@@ -13,6 +13,7 @@ import { choosePlan, useSelectedPlan } from "../../common/hooks/use-selected-pla
 import { formatShortDate, localDateIn } from "../../common/lib/dates.ts";
 import { formatArea, useUnits } from "../../common/lib/units.ts";
 import { PlanTimeline } from "./components/plan-timeline.tsx";
+import { PrintedCompany } from "./components/printed-company.tsx";
 import "./print.css";
 
 /** The whole care plan; also what gets printed for the fridge. */
@@ -58,6 +59,7 @@ function WholePlan({ header, plans }: { header: PlanHeader; plans: PlanHeader[] 
 
   return (
     <div className="printable-plan">
+      <PrintedCompany />
       <Page
         title={t("plan.title")}
         width="wide"

@@ -19,6 +19,7 @@ import { NextMilestone } from "./components/next-milestone.tsx";
 import { NoPlanYet } from "./components/no-plan-yet.tsx";
 import { SproutsPrompt, sproutsAlreadyReported } from "./components/sprouts-prompt.tsx";
 import { StepCard } from "./components/step-card.tsx";
+import { UnreadNotice } from "./components/unread-notice.tsx";
 
 /** The home screen: what to do on the lawn today, readable in five seconds. */
 export function TodayRoute() {
@@ -61,6 +62,7 @@ function TodayForPlan({ plan, plans }: { plan: PlanHeader; plans: PlanHeader[] }
         </>
       }
     >
+      <UnreadNotice plan={plan} plans={plans} company={user.companyName} />
       <PlanSwitcher plans={plans} selectedId={plan.id} onChange={choosePlan} />
       {today ? (
         <>
