@@ -6,6 +6,7 @@ import { usePlan } from "../../common/api/get-plan.ts";
 import { HoldOffList } from "../../common/components/hold-off-list.tsx";
 import { OfflineNotice } from "../../common/components/offline-notice.tsx";
 import { PlanSwitcher } from "../../common/components/plan-switcher.tsx";
+import { PlanVisits } from "../../common/components/plan-visits.tsx";
 import { PlanWarnings } from "../../common/components/plan-warnings.tsx";
 import { QueryFallback } from "../../common/components/query-fallback.tsx";
 import { Section } from "../../common/components/section.tsx";
@@ -95,6 +96,7 @@ function WholePlan({ header, plans }: { header: PlanHeader; plans: PlanHeader[] 
             )}
             <div className="grid gap-8 lg:grid-cols-[minmax(0,1fr)_20rem] lg:items-start">
               <div className="lg:order-2 space-y-8">
+                <PlanVisits planId={header.id} today={today} />
                 {plan.holdOffs.length > 0 && (
                   <Section title={t("plan.holdOffsHeading")}>
                     <HoldOffList holdOffs={plan.holdOffs} cautions={plan.cautions} />
