@@ -3,6 +3,7 @@ import { useNavigate, useParams } from "react-router-dom";
 import type { PlanHeader } from "#shared/schemas/plans";
 import { Button, EmptyState, ErrorState, Page } from "#shared/ui/index";
 import { usePlan } from "../../common/api/get-plan.ts";
+import { usePlanVisits } from "../../common/api/get-plan-visits.ts";
 import { HoldOffList } from "../../common/components/hold-off-list.tsx";
 import { OfflineNotice } from "../../common/components/offline-notice.tsx";
 import { PlanSwitcher } from "../../common/components/plan-switcher.tsx";
@@ -53,6 +54,7 @@ function WholePlan({ header, plans }: { header: PlanHeader; plans: PlanHeader[] 
   const units = useUnits();
   const planQuery = usePlan(header.id);
   const plan = planQuery.data;
+  const visits = usePlanVisits(header.id).data;
   const today = localDateIn(header.timeZone);
   const anchorDate = plan?.steps.map((s) => s.date).sort().find((date) => date >= today);
   const areaFt2 = typeof plan?.figures.areaFt2 === "number" ? plan.figures.areaFt2 : undefined;
@@ -109,7 +111,7 @@ function WholePlan({ header, plans }: { header: PlanHeader; plans: PlanHeader[] 
                 )}
               </div>
               <div className="lg:order-1">
-                <PlanTimeline plan={plan} today={today} anchorDate={anchorDate} />
+                <PlanTimeline plan={plan} today={today} anchorDate={anchorDate} visits={visits} />
               </div>
             </div>
           </>
