@@ -1,5 +1,8 @@
-import { expect, test } from "@playwright/test";
+import { expect as baseExpect, test } from "@playwright/test";
 import { expectNoSeriousA11yViolations, signInHomeownerThroughOutbox, signInStaff } from "./support.ts";
+
+/** Each screen loads its code and data on first visit; on a shared test machine that can pass five seconds. */
+const expect = baseExpect.configure({ timeout: 15_000 });
 
 /**
  * A follow-up visit reaches the homeowner: a manager books it for a technician from the follow-ups page with an
@@ -18,6 +21,8 @@ function daysAhead(days: number): string {
 }
 
 test("a booked visit reaches the homeowner, who asks for another day, and staff see the request", async ({ browser }) => {
+  // Three people's screens in one journey: longer than one screen's test.
+  test.setTimeout(180_000);
   const visitDate = daysAhead(4);
   const prep = "Don't mow for two days before the visit";
 
@@ -76,15 +81,20 @@ test("a booked visit reaches the homeowner, who asks for another day, and staff 
 
   // The whole plan has the visit on its day, and in its Visits section with the answer given.
   await home.goto("/portal/plan");
-  await expect(home.getByText(/^Visit from /).first()).toBeVisible();
-  await expect(home.getByRole("region", { name: "Visits" })).toContainText("You asked for another day");
+  // The whole plan is hundreds of steps: on a busy machine it takes a while to lay out.
+  await expect(home.getByRole("region", { name: "Visits" })).toContainText("You asked for another day", { timeout: 20_000 });
+  await expect(home.getByText(/^Visit from /).first()).toBeVisible({ timeout: 20_000 });
 
   // Staff see the request in the question queue.
   await staff.goto("/staff/questions");
   await expect(staff.getByRole("heading", { level: 1, name: "Question queue" })).toBeVisible();
-  const request = staff.getByRole("listitem").filter({ hasText: note });
-  await expect(request).toContainText("Could we move the visit");
-  await expect(request).toContainText("Days that suit me: Monday, Friday.");
+  // The queue shows the start of the request; the question page shows all of it.
+  const request = staff.getByRole("listitem").filter({ hasText: "Could we move the visit" }).filter({ hasText: "Desmond" });
+  await expect(request).toBeVisible();
+  await request.getByTestId("queue-question-link").click();
+  const question = staff.getByTestId("question-card").filter({ hasText: note });
+  await expect(question).toContainText("Could we move the visit");
+  await expect(question).toContainText("Days that suit me: Monday, Friday.");
 
   await homeContext.close();
   await staffContext.close();
