@@ -30,6 +30,12 @@ async function makeStaffRecords() {
   const ruth = await ctx.db("customers").where({ external_ref: "C-1001" }).first<{ id: number; company_id: number }>("id", "company_id");
   const manager = await ctx.db("users").where({ email: "dana@cobblefield.example" }).first<{ id: number }>("id");
   const [followUp] = await ctx.db("follow_up_visits").insert({ property_id: records.own.id, plan_id: records.own.planId, reason: "other", created_by: manager!.id }).returning<{ id: number }[]>("id");
+  // A booked visit of each homeowner, for the homeowner's answers to a visit.
+  const bookedVisit = (r: Record<string, number>) => ({ property_id: r.id, plan_id: r.planId, reason: "other", status: "scheduled", scheduled_for: "2026-12-20", technician_id: manager!.id, created_by: manager!.id });
+  const [ownVisit] = await ctx.db("follow_up_visits").insert(bookedVisit(records.own)).returning<{ id: number }[]>("id");
+  const [otherVisit] = await ctx.db("follow_up_visits").insert(bookedVisit(records.other)).returning<{ id: number }[]>("id");
+  records.own.visitAnswerId = ownVisit!.id;
+  records.other.visitAnswerId = otherVisit!.id;
   const [reply] = await ctx.db("saved_replies").insert({ company_id: ruth!.company_id, title: `matrix ${Date.now()}`, body: "Hello {{firstName}}" }).returning<{ id: number }[]>("id");
   // A stranger's text, kept for managers; marking it handled twice is harmless.
   const [unmatched] = await ctx.db("unmatched_inbound").insert({ company_id: ruth!.company_id, channel: "sms", sender: "+13305550177", body: "matrix" }).returning<{ id: string }[]>("id");
@@ -76,6 +82,8 @@ function fillPath(path: string, caller: Caller): string {
   const idFor = (name: string): string | number => {
     if (name === "size") return "thumb";
     if (name === "file") return "not-a-real-token.ics";
+    // The homeowner's answers to a visit: their own visit, or the other homeowner's.
+    if (name === "id" && /^\/api\/follow-ups\/:id\/(confirm|another-day)$/.test(path)) return ids.visitAnswerId!;
     const staffRecord = staffRecordIds[`${path.split("/")[2]}:${name}`];
     if (staffRecord !== undefined) return staffRecord;
     // :id is a property unless the path names another kind of record.

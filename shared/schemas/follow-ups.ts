@@ -36,6 +36,10 @@ export const followUpReasonLabels: Record<FollowUpReason, string> = {
   other: "Other",
 };
 
+/** How the homeowner answered a booked visit. */
+export const CUSTOMER_RESPONSES = ["confirmed", "another_day"] as const;
+export type CustomerResponse = (typeof CUSTOMER_RESPONSES)[number];
+
 export const FOLLOW_UP_OUTCOMES = ["resolved", "partly_resolved", "not_resolved", "pending"] as const;
 export type FollowUpOutcome = (typeof FOLLOW_UP_OUTCOMES)[number];
 
@@ -54,6 +58,26 @@ const positiveId = z.number().int().positive().max(2_147_483_647);
 const note = z.string().trim().max(2000, "Keep it under 2,000 characters");
 const hours = z.number().min(0, "Must be 0 or more").max(200, "Must be at most 200 hours");
 const money = z.number().min(0, "Must be 0 or more").max(100_000, "Must be at most 100,000");
+/** A local wall-clock time, "HH:MM" (24-hour), at the lawn. */
+export const arrivalTimeSchema = z.string().regex(/^([01]\d|2[0-3]):[0-5]\d$/, "Give a time like 09:30");
+const prep = z.string().trim().max(500, "Keep it under 500 characters");
+
+/**
+ * What a homeowner is usually asked to do before a return visit, by its reason; staff pick
+ * one or write their own. Common practice, not a rule: the technician knows the lawn.
+ */
+export const customerPrepSuggestions: Record<FollowUpReason, readonly string[]> = {
+  no_germination: ["Don't mow for two days before the visit", "Keep watering as planned until we arrive"],
+  washed_out: ["Don't rake or fill the washed-out spots; we'll want to see them as they are"],
+  mowed_too_early: ["Don't mow again before the visit"],
+  herbicide_applied: ["Keep the product's container or label so we can read it", "Don't apply anything else before the visit"],
+  poor_seed_soil_contact: ["Don't mow the day before", "Water lightly the evening before so the soil is soft"],
+  under_watering: ["Keep watering as planned and leave the sprinkler settings as they are"],
+  over_watering: ["Skip watering the day before the visit"],
+  disease: ["Don't mow or water the day before", "Don't apply any treatment before we've looked"],
+  pest_damage: ["Don't apply pest control before the visit", "Leave the damaged patches as they are"],
+  other: ["Make sure the gate is unlocked and pets are inside"],
+};
 
 export const createFollowUpSchema = z.object({
   propertyId: positiveId,
@@ -64,6 +88,9 @@ export const createFollowUpSchema = z.object({
   scheduledFor: isoDateSchema.optional(),
   technicianId: positiveId.optional(),
   isCallback: z.boolean().optional(),
+  arrivalStart: arrivalTimeSchema.optional(),
+  arrivalEnd: arrivalTimeSchema.optional(),
+  customerPrep: prep.optional(),
 });
 export type CreateFollowUp = z.infer<typeof createFollowUpSchema>;
 
@@ -79,6 +106,10 @@ export const updateFollowUpSchema = z
     materialsCost: money.nullable().optional(),
     outcome: z.enum(FOLLOW_UP_OUTCOMES).optional(),
     outcomeNote: note.nullable().optional(),
+    arrivalStart: arrivalTimeSchema.nullable().optional(),
+    arrivalEnd: arrivalTimeSchema.nullable().optional(),
+    customerPrep: prep.nullable().optional(),
+    workDone: note.nullable().optional(),
   })
   .refine((patch) => Object.values(patch).some((v) => v !== undefined), { message: "Nothing to change", path: ["_"] });
 export type UpdateFollowUp = z.infer<typeof updateFollowUpSchema>;
@@ -127,8 +158,43 @@ export const followUpSchema = z.object({
   createdByName: z.string().nullable(),
   createdAt: z.string(),
   updatedAt: z.string(),
+  arrivalStart: z.string().nullable(),
+  arrivalEnd: z.string().nullable(),
+  customerPrep: z.string().nullable(),
+  workDone: z.string().nullable(),
+  customerResponse: z.enum(CUSTOMER_RESPONSES).nullable(),
+  customerRespondedAt: z.string().nullable(),
 });
 export type FollowUp = z.infer<typeof followUpSchema>;
 
 export const followUpListSchema = z.object({ rows: z.array(followUpSchema), total: z.number().int() });
 export const followUpResponseSchema = z.object({ followUp: followUpSchema });
+
+/** A follow-up visit as its homeowner sees it: no costs, outcomes or staff notes. */
+export const planVisitSchema = z.object({
+  id: z.number().int(),
+  planId: z.number().int().nullable(),
+  status: z.enum(FOLLOW_UP_STATUSES),
+  scheduledFor: z.string().nullable(),
+  arrivalStart: z.string().nullable(),
+  arrivalEnd: z.string().nullable(),
+  /** First name only: who rings the bell. */
+  technicianName: z.string().nullable(),
+  reason: z.enum(FOLLOW_UP_REASONS),
+  customerPrep: z.string().nullable(),
+  workDone: z.string().nullable(),
+  customerResponse: z.enum(CUSTOMER_RESPONSES).nullable(),
+});
+export type PlanVisit = z.infer<typeof planVisitSchema>;
+export const planVisitsResponseSchema = z.object({ visits: z.array(planVisitSchema) });
+export const planVisitResponseSchema = z.object({ visit: planVisitSchema });
+
+export const WEEKDAYS = ["mon", "tue", "wed", "thu", "fri", "sat", "sun"] as const;
+export type Weekday = (typeof WEEKDAYS)[number];
+
+/** The homeowner asks to move a booked visit; both parts optional. */
+export const anotherDaySchema = z.object({
+  note: z.string().trim().max(1000, "Keep it under 1,000 characters").optional(),
+  preferredDays: z.array(z.enum(WEEKDAYS)).max(7).optional(),
+});
+export type AnotherDay = z.infer<typeof anotherDaySchema>;

@@ -1,11 +1,12 @@
 import ical, { ICalEventTransparency } from "ical-generator";
 import { addDays } from "#shared/engine/dates";
 import { holdOffSchema, type StoredHoldOff } from "#shared/schemas/plans";
-import type { FeedPlan, FeedStep } from "./repo.ts";
+import { followUpReasonLabels, type FollowUpReason } from "#shared/schemas/follow-ups";
+import type { FeedPlan, FeedStep, FeedVisit } from "./repo.ts";
 import { buildVTimezone } from "./vtimezone.ts";
 import { wallClock } from "./wall-clock.ts";
 
-export type FeedInput = { companyName: string; plans: readonly FeedPlan[]; steps: readonly FeedStep[] };
+export type FeedInput = { companyName: string; plans: readonly FeedPlan[]; steps: readonly FeedStep[]; visits?: readonly FeedVisit[] };
 
 /** Calendar apps poll subscribed feeds; a few hours is what they honour anyway. */
 const REFRESH_SECONDS = 4 * 60 * 60;
@@ -56,7 +57,8 @@ export function buildFeed(input: FeedInput): string {
       return parsed.success ? [{ plan, holdOff: parsed.data as StoredHoldOff }] : [];
     }),
   );
-  const years = [...input.steps.map((s) => yearOf(s.date)), ...holdOffs.flatMap(({ holdOff }) => [yearOf(holdOff.start), yearOf(holdOff.end)])];
+  const visits = input.visits ?? [];
+  const years = [...input.steps.map((s) => yearOf(s.date)), ...visits.map((v) => yearOf(v.date)), ...holdOffs.flatMap(({ holdOff }) => [yearOf(holdOff.start), yearOf(holdOff.end)])];
   const fromYear = years.length ? Math.min(...years) : new Date().getUTCFullYear();
   const toYear = years.length ? Math.max(...years) : fromYear;
 
@@ -109,5 +111,37 @@ export function buildFeed(input: FeedInput): string {
       transparency: ICalEventTransparency.TRANSPARENT,
     });
   }
+  for (const visit of visits) addVisit(calendar, input.companyName, visit);
   return calendar.toString();
+}
+
+function visitDescription(companyName: string, visit: FeedVisit): string {
+  const reason = followUpReasonLabels[visit.reason as FollowUpReason] ?? visit.reason;
+  const parts = [`${visit.technicianName ? `${visit.technicianName} from ${companyName}` : companyName} comes back to look at the lawn (${reason.toLowerCase()}).`];
+  if (visit.customerPrep) parts.push(`Before the visit: ${visit.customerPrep}`);
+  return parts.join("\n\n");
+}
+
+/**
+ * A booked follow-up visit: a timed event over the arrival window in the lawn's zone, or an
+ * all-day event while no window is set. Busy, unlike plan steps: someone has to be there.
+ */
+function addVisit(calendar: ReturnType<typeof ical>, companyName: string, visit: FeedVisit) {
+  const common = {
+    id: `follow-up.${visit.id}@sproutline`,
+    summary: `Lawn visit from ${companyName}`,
+    description: visitDescription(companyName, visit),
+    location: visit.street,
+    transparency: ICalEventTransparency.OPAQUE,
+  };
+  if (visit.arrivalStart && visit.arrivalEnd) {
+    calendar.createEvent({
+      ...common,
+      timezone: visit.timeZone,
+      start: wallClock(visit.date, visit.arrivalStart, visit.timeZone),
+      end: wallClock(visit.date, visit.arrivalEnd, visit.timeZone),
+    });
+  } else {
+    calendar.createEvent({ ...common, allDay: true, start: visit.date, end: addDays(visit.date, 1) });
+  }
 }

@@ -37,6 +37,36 @@ export async function findFeedOwner(db: Db, tokenHash: string): Promise<{ custom
 export type FeedPlan = { planId: number; timeZone: string; street: string; holdOffs: unknown[] };
 export type FeedStep = { planId: number; key: string; date: string; kind: string; title: string; state: string; content: Record<string, unknown> };
 
+export type FeedVisit = {
+  id: number;
+  date: string;
+  arrivalStart: string | null;
+  arrivalEnd: string | null;
+  timeZone: string;
+  street: string;
+  reason: string;
+  technicianName: string | null;
+  customerPrep: string | null;
+};
+
+/** The customer's booked follow-up visits that have a date, on any of their lawns. */
+export async function loadFeedVisits(db: Db, customerId: number): Promise<FeedVisit[]> {
+  const rows = await db("follow_up_visits as f")
+    .join("properties", "properties.id", "f.property_id")
+    .leftJoin("users as technician", "technician.id", "f.technician_id")
+    .where({ "properties.customer_id": customerId, "f.status": "scheduled" })
+    .whereNotNull("f.scheduled_for")
+    .orderBy([{ column: "f.scheduled_for" }, { column: "f.id" }])
+    .select<{ id: number; date: string; arrival_start: string | null; arrival_end: string | null; time_zone: string; street: string; reason: string; technician_first_name: string | null; customer_prep: string | null }[]>(
+      "f.id", db.raw("to_char(f.scheduled_for, 'YYYY-MM-DD') as date"), "f.arrival_start", "f.arrival_end", "properties.time_zone", "properties.street",
+      "f.reason", db.raw("split_part(technician.name, ' ', 1) as technician_first_name"), "f.customer_prep",
+    );
+  return rows.map((r) => ({
+    id: r.id, date: r.date, arrivalStart: r.arrival_start, arrivalEnd: r.arrival_end, timeZone: r.time_zone, street: r.street,
+    reason: r.reason, technicianName: r.technician_first_name, customerPrep: r.customer_prep,
+  }));
+}
+
 /** The customer's active care plans and their steps (skipped steps left out: nothing to do then). */
 export async function loadFeedPlans(db: Db, customerId: number): Promise<{ plans: FeedPlan[]; steps: FeedStep[] }> {
   const planRows = await db("care_plans")

@@ -47,6 +47,6 @@ export async function renderFeed(deps: CalendarDeps, token: string): Promise<str
   if (!isFeedTokenShaped(token)) return undefined;
   const owner = await repo.findFeedOwner(deps.db, hashFeedToken(token));
   if (!owner) return undefined;
-  const { plans, steps } = await repo.loadFeedPlans(deps.db, owner.customerId);
-  return buildFeed({ companyName: owner.companyName, plans, steps });
+  const [{ plans, steps }, visits] = await Promise.all([repo.loadFeedPlans(deps.db, owner.customerId), repo.loadFeedVisits(deps.db, owner.customerId)]);
+  return buildFeed({ companyName: owner.companyName, plans, steps, visits });
 }

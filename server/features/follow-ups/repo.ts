@@ -1,5 +1,5 @@
 import type { Knex } from "knex";
-import type { FollowUp, FollowUpFilter, FollowUpOutcome, FollowUpReason, FollowUpStatus } from "#shared/schemas/follow-ups";
+import type { CustomerResponse, FollowUp, FollowUpFilter, FollowUpOutcome, FollowUpReason, FollowUpStatus } from "#shared/schemas/follow-ups";
 import type { Db } from "../../db.ts";
 
 type Row = {
@@ -26,6 +26,12 @@ type Row = {
   created_by_name: string | null;
   created_at: Date;
   updated_at: Date;
+  arrival_start: string | null;
+  arrival_end: string | null;
+  customer_prep: string | null;
+  work_done: string | null;
+  customer_response: CustomerResponse | null;
+  customer_responded_at: Date | null;
 };
 
 const numberOrNull = (value: string | null) => (value === null ? null : Number(value));
@@ -53,6 +59,12 @@ export const toFollowUp = (r: Row): FollowUp => ({
   createdByName: r.created_by_name,
   createdAt: r.created_at.toISOString(),
   updatedAt: r.updated_at.toISOString(),
+  arrivalStart: r.arrival_start,
+  arrivalEnd: r.arrival_end,
+  customerPrep: r.customer_prep,
+  workDone: r.work_done,
+  customerResponse: r.customer_response,
+  customerRespondedAt: r.customer_responded_at?.toISOString() ?? null,
 });
 
 /** The follow-up's date: the day it is scheduled for, else the day it was requested at the lawn. */
@@ -85,6 +97,7 @@ function selectColumns(query: Knex.QueryBuilder, db: Db) {
     "f.plan_id", "f.question_message_id", "f.status", db.raw(`${followUpDate} as follow_up_date`), "f.scheduled_for",
     "f.technician_id", "technician.name as technician_name", "f.reason", "f.reason_note", "f.is_callback", "f.labour_hours",
     "f.materials_cost", "f.outcome", "f.outcome_note", "creator.name as created_by_name", "f.created_at", "f.updated_at",
+    "f.arrival_start", "f.arrival_end", "f.customer_prep", "f.work_done", "f.customer_response", "f.customer_responded_at",
   );
 }
 
@@ -146,6 +159,12 @@ export type FollowUpColumns = {
   outcome: FollowUpOutcome;
   outcome_note: string | null;
   created_by: number | null;
+  arrival_start: string | null;
+  arrival_end: string | null;
+  customer_prep: string | null;
+  work_done: string | null;
+  customer_response: CustomerResponse | null;
+  customer_responded_at: Date | null;
 };
 
 export async function insertFollowUp(trx: Db, row: Partial<FollowUpColumns> & Pick<FollowUpColumns, "property_id" | "reason">): Promise<number> {
@@ -198,4 +217,10 @@ export async function exportFollowUps(db: Db, companyId: number, filter: FollowU
 export async function followUpsOfCustomer(db: Db, companyId: number, customerId: number): Promise<FollowUp[]> {
   const rows = await selectColumns(scoped(db, companyId), db).andWhere("customers.id", customerId).orderBy("f.created_at", "desc");
   return (rows as Row[]).map(toFollowUp);
+}
+
+/** The property's newest active care plan: where news of a visit booked without a plan goes. */
+export async function newestActivePlan(db: Db, propertyId: number): Promise<number | null> {
+  const row = await db("care_plans").where({ property_id: propertyId, status: "active" }).orderBy("id", "desc").first<{ id: number } | undefined>("id");
+  return row?.id ?? null;
 }

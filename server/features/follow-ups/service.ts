@@ -3,6 +3,7 @@ import type { SessionUser } from "../../auth/session-user.ts";
 import type { Db } from "../../db.ts";
 import { HttpError, notFound } from "../../http/errors.ts";
 import { findInCompany } from "../properties/repo.ts";
+import { announceVisit, visitChange } from "./announce.ts";
 import * as repo from "./repo.ts";
 
 const invalid = (fields: Record<string, string>) => new HttpError(400, "invalid_input", "Some of the information is not valid.", fields);
@@ -12,6 +13,14 @@ async function checkTechnician(db: Db, companyId: number, technicianId: number |
   if (!(await repo.isActiveStaff(db, companyId, technicianId))) {
     throw invalid({ technicianId: "Pick an active technician or manager of your company" });
   }
+}
+
+/** An arrival window is both ends or neither, and ends after it starts ("HH:MM" compares as text). */
+export function checkWindow(start: string | null | undefined, end: string | null | undefined): Record<string, string> {
+  if ((start ?? null) === null && (end ?? null) === null) return {};
+  if (!start) return { arrivalStart: "Give the start of the arrival window" };
+  if (!end) return { arrivalEnd: "Give the end of the arrival window" };
+  return end > start ? {} : { arrivalEnd: "The window must end after it starts" };
 }
 
 /**
@@ -35,19 +44,29 @@ export async function createFollowUp(db: Db, user: SessionUser, body: CreateFoll
     throw invalid({ planId: "That care plan is not of this property" });
   }
   await checkTechnician(db, user.companyId, body.technicianId);
+  const windowFields = checkWindow(body.arrivalStart, body.arrivalEnd);
+  if (Object.keys(windowFields).length) throw invalid(windowFields);
 
   const scheduled = body.scheduledFor !== undefined && body.technicianId !== undefined;
-  const id = await repo.insertFollowUp(db, {
-    property_id: property.id,
-    plan_id: planId,
-    question_message_id: body.questionMessageId ?? null,
-    status: scheduled ? "scheduled" : "requested",
-    scheduled_for: body.scheduledFor ?? null,
-    technician_id: body.technicianId ?? null,
-    reason: body.reason,
-    reason_note: body.reasonNote ?? null,
-    is_callback: body.isCallback ?? false,
-    created_by: user.id,
+  const id = await db.transaction(async (trx) => {
+    const newId = await repo.insertFollowUp(trx, {
+      property_id: property.id,
+      plan_id: planId,
+      question_message_id: body.questionMessageId ?? null,
+      status: scheduled ? "scheduled" : "requested",
+      scheduled_for: body.scheduledFor ?? null,
+      technician_id: body.technicianId ?? null,
+      reason: body.reason,
+      reason_note: body.reasonNote ?? null,
+      is_callback: body.isCallback ?? false,
+      created_by: user.id,
+      arrival_start: body.arrivalStart ?? null,
+      arrival_end: body.arrivalEnd ?? null,
+      customer_prep: body.customerPrep || null,
+    });
+    const after = { status: scheduled ? "scheduled" : "requested", scheduledFor: body.scheduledFor ?? null, arrivalStart: body.arrivalStart ?? null, arrivalEnd: body.arrivalEnd ?? null } as const;
+    await announceVisit(trx, { id: newId, planId, propertyId: property.id }, visitChange(null, after));
+    return newId;
   });
   return (await repo.findFollowUp(db, user.companyId, id))!;
 }
@@ -107,6 +126,7 @@ export function checkChange(current: FollowUp, patch: UpdateFollowUp, role: Sess
     if (!next.scheduledFor) fields.scheduledFor = "Give the date of the visit";
     if (!next.technicianId) fields.technicianId = "Pick the technician who goes";
   }
+  Object.assign(fields, checkWindow(next.arrivalStart, next.arrivalEnd));
   if (next.isCallback && next.status === "done" && next.labourHours === null) {
     fields.labourHours = "Record the labour hours of this callback";
   }
@@ -125,6 +145,8 @@ export async function updateFollowUp(db: Db, user: SessionUser, id: number, patc
     await checkTechnician(trx, user.companyId, patch.technicianId);
 
     const unCallback = patch.isCallback === false && current.isCallback;
+    const next = merge(current, patch);
+    const change = visitChange(current, next);
     await repo.updateFollowUp(trx, id, {
       status: patch.status,
       scheduled_for: patch.scheduledFor,
@@ -136,7 +158,14 @@ export async function updateFollowUp(db: Db, user: SessionUser, id: number, patc
       ...(unCallback
         ? { labour_hours: null, materials_cost: null, outcome: "pending", outcome_note: null }
         : { labour_hours: patch.labourHours, materials_cost: patch.materialsCost, outcome: patch.outcome, outcome_note: patch.outcomeNote }),
+      arrival_start: patch.arrivalStart,
+      arrival_end: patch.arrivalEnd,
+      customer_prep: patch.customerPrep === "" ? null : patch.customerPrep,
+      work_done: patch.workDone === "" ? null : patch.workDone,
+      // A moved visit is a new appointment: the homeowner's earlier answer was about the old one.
+      ...(change === "moved" ? { customer_response: null, customer_responded_at: null } : {}),
     });
+    await announceVisit(trx, current, change);
   });
   return (await repo.findFollowUp(db, user.companyId, id))!;
 }

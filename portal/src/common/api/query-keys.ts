@@ -6,6 +6,7 @@ export const portalKeys = {
   myPlans: ["plans", "mine"] as const,
   plan: (planId: number) => ["plans", planId] as const,
   today: (planId: number) => ["plans", planId, "today"] as const,
+  visits: (planId: number) => ["plans", planId, "visits"] as const,
   thread: (planId: number) => ["threads", planId] as const,
   preferences: ["preferences"] as const,
   calendarFeed: ["calendar-feed"] as const,

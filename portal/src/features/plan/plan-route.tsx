@@ -3,9 +3,11 @@ import { useNavigate, useParams } from "react-router-dom";
 import type { PlanHeader } from "#shared/schemas/plans";
 import { Button, EmptyState, ErrorState, Page } from "#shared/ui/index";
 import { usePlan } from "../../common/api/get-plan.ts";
+import { usePlanVisits } from "../../common/api/get-plan-visits.ts";
 import { HoldOffList } from "../../common/components/hold-off-list.tsx";
 import { OfflineNotice } from "../../common/components/offline-notice.tsx";
 import { PlanSwitcher } from "../../common/components/plan-switcher.tsx";
+import { PlanVisits } from "../../common/components/plan-visits.tsx";
 import { PlanWarnings } from "../../common/components/plan-warnings.tsx";
 import { QueryFallback } from "../../common/components/query-fallback.tsx";
 import { Section } from "../../common/components/section.tsx";
@@ -53,6 +55,7 @@ function WholePlan({ header, plans }: { header: PlanHeader; plans: PlanHeader[] 
   const units = useUnits();
   const planQuery = usePlan(header.id);
   const plan = planQuery.data;
+  const visits = usePlanVisits(header.id).data;
   const today = localDateIn(header.timeZone);
   const anchorDate = plan?.steps.map((s) => s.date).sort().find((date) => date >= today);
   const areaFt2 = typeof plan?.figures.areaFt2 === "number" ? plan.figures.areaFt2 : undefined;
@@ -97,6 +100,7 @@ function WholePlan({ header, plans }: { header: PlanHeader; plans: PlanHeader[] 
             )}
             <div className="grid gap-8 lg:grid-cols-[minmax(0,1fr)_20rem] lg:items-start">
               <div className="lg:order-2 space-y-8">
+                <PlanVisits planId={header.id} today={today} />
                 {plan.holdOffs.length > 0 && (
                   <Section title={t("plan.holdOffsHeading")}>
                     <HoldOffList holdOffs={plan.holdOffs} cautions={plan.cautions} />
@@ -109,7 +113,7 @@ function WholePlan({ header, plans }: { header: PlanHeader; plans: PlanHeader[] 
                 )}
               </div>
               <div className="lg:order-1">
-                <PlanTimeline plan={plan} today={today} anchorDate={anchorDate} />
+                <PlanTimeline plan={plan} today={today} anchorDate={anchorDate} visits={visits} />
               </div>
             </div>
           </>

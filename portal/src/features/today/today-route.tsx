@@ -11,6 +11,7 @@ import { PlanSwitcher } from "../../common/components/plan-switcher.tsx";
 import { PlanWarnings } from "../../common/components/plan-warnings.tsx";
 import { QueryFallback } from "../../common/components/query-fallback.tsx";
 import { Section } from "../../common/components/section.tsx";
+import { UpcomingVisits } from "../../common/components/upcoming-visits.tsx";
 import { choosePlan, useSelectedPlan } from "../../common/hooks/use-selected-plan.ts";
 import { daysBetween, formatLongDate, localDateIn } from "../../common/lib/dates.ts";
 import { whenSettled } from "../../common/lib/when-idle.ts";
@@ -127,6 +128,8 @@ function TodayContent({ today }: { today: TodayResponse }) {
           </EmptyState>
         )}
       </Section>
+
+      <UpcomingVisits planId={planId} today={today.today} />
 
       {waitingForSprouts && (
         <div className="mt-6">

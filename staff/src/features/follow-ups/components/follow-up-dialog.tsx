@@ -4,6 +4,7 @@ import { followUpTransitions, type FollowUp, type FollowUpStatus } from "#shared
 import type { TeamMember } from "#shared/schemas/team";
 import { Button, CheckboxField, Dialog, Notice, SelectField, TextAreaField, TextField, applyServerErrors } from "#shared/ui/index";
 import { useState } from "react";
+import { HomeownerVisitFields } from "../../../common/components/homeowner-visit-fields.tsx";
 import { useUpdateFollowUp } from "../api/update-follow-up.ts";
 import { followUpFormFields, followUpFormSchema, formValuesOf, patchOf, type FollowUpFormValues } from "../lib/follow-up-form.ts";
 import { formatDay, outcomeOptions, reasonOptions, statusLabels } from "../lib/labels.ts";
@@ -35,13 +36,14 @@ function FollowUpForm({ followUp, targetStatus, staff, onDone }: { followUp: Fol
     resolver: zodResolver(followUpFormSchema),
     defaultValues: formValuesOf(followUp, targetStatus),
   });
-  const { register, handleSubmit, watch, setError, formState } = form;
+  const { register, handleSubmit, watch, setError, setValue, formState } = form;
   const errors = formState.errors;
   const update = useUpdateFollowUp();
   const [formError, setFormError] = useState<string | null>(null);
   const [nothingChanged, setNothingChanged] = useState(false);
 
   const isCallback = watch("isCallback");
+  const status = watch("status");
   // A closed follow-up feeds the report: only a callback's cost and outcome may still be corrected.
   const closed = followUp.status === "closed";
   const statusChoices = [followUp.status, ...followUpTransitions[followUp.status]].map((value) => ({ value, label: statusLabels[value] }));
@@ -69,6 +71,7 @@ function FollowUpForm({ followUp, targetStatus, staff, onDone }: { followUp: Fol
     <form noValidate onSubmit={(e) => void submit(e)} className="flex flex-col gap-4">
       {formError && <Notice tone="danger">{formError}</Notice>}
       {nothingChanged && <Notice>Nothing has changed yet.</Notice>}
+      <HomeownerAnswer followUp={followUp} />
       <SelectField label="Status" options={statusChoices} disabled={closed} error={errors.status?.message} {...register("status")} />
       <div className="grid gap-4 sm:grid-cols-2">
         <TextField label="Visit date" type="date" disabled={closed} error={errors.scheduledFor?.message} {...register("scheduledFor")} />
@@ -83,6 +86,24 @@ function FollowUpForm({ followUp, targetStatus, staff, onDone }: { followUp: Fol
       </div>
       <SelectField label="Reason" options={reasonOptions} disabled={closed} error={errors.reason?.message} {...register("reason")} />
       <TextAreaField label="Reason note (optional)" rows={2} disabled={closed} error={errors.reasonNote?.message} {...register("reasonNote")} />
+      <HomeownerVisitFields
+        start={{ error: errors.arrivalStart?.message, ...register("arrivalStart") }}
+        end={{ error: errors.arrivalEnd?.message, ...register("arrivalEnd") }}
+        prep={{ error: errors.customerPrep?.message, ...register("customerPrep") }}
+        reason={watch("reason")}
+        onSuggest={(text) => setValue("customerPrep", text, { shouldDirty: true })}
+        disabled={closed}
+      />
+      {(status === "done" || followUp.workDone) && (
+        <TextAreaField
+          label="What was done"
+          hint="The homeowner reads this in their plan's visit history."
+          rows={3}
+          disabled={closed}
+          error={errors.workDone?.message}
+          {...register("workDone")}
+        />
+      )}
       <CheckboxField
         label="This is a callback"
         hint="A free return visit because the result failed. Only callbacks count in the callback report and carry a cost."
@@ -116,4 +137,17 @@ function CallbackFields({ form }: { form: ReturnType<typeof useForm<FollowUpForm
       <TextAreaField label="Outcome note (optional)" rows={2} error={errors.outcomeNote?.message} {...register("outcomeNote")} />
     </fieldset>
   );
+}
+
+/** How the homeowner answered the booked visit; a request for another day is also in the question queue. */
+function HomeownerAnswer({ followUp }: { followUp: FollowUp }) {
+  if (followUp.customerResponse === "confirmed") return <Notice tone="success">The homeowner confirmed this visit.</Notice>;
+  if (followUp.customerResponse === "another_day") {
+    return (
+      <Notice tone="warning" title="The homeowner asked for another day">
+        Their message is in the question queue. Pick a new date here; they are told when you save.
+      </Notice>
+    );
+  }
+  return null;
 }

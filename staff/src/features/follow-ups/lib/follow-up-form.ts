@@ -34,8 +34,17 @@ export const followUpFormSchema = z
     materialsCost: numberText(100_000, "Must be at most 100,000"),
     outcome: z.enum(FOLLOW_UP_OUTCOMES),
     outcomeNote: note,
+    arrivalStart: z.string(),
+    arrivalEnd: z.string(),
+    customerPrep: z.string().trim().max(500, "Keep it under 500 characters"),
+    workDone: note,
   })
   .superRefine((v, ctx) => {
+    if (Boolean(v.arrivalStart) !== Boolean(v.arrivalEnd)) {
+      ctx.addIssue({ code: "custom", path: [v.arrivalStart ? "arrivalEnd" : "arrivalStart"], message: "Give both ends of the arrival window" });
+    } else if (v.arrivalStart && v.arrivalEnd.slice(0, 5) <= v.arrivalStart.slice(0, 5)) {
+      ctx.addIssue({ code: "custom", path: ["arrivalEnd"], message: "The window must end after it starts" });
+    }
     const needsVisit = v.status === "scheduled" || v.status === "done";
     if (needsVisit && !v.scheduledFor) ctx.addIssue({ code: "custom", path: ["scheduledFor"], message: "Give the date of the visit" });
     if (needsVisit && !v.technicianId) ctx.addIssue({ code: "custom", path: ["technicianId"], message: "Pick the technician who goes" });
@@ -50,6 +59,7 @@ export const followUpFormSchema = z
 export type FollowUpFormValues = z.infer<typeof followUpFormSchema>;
 export const followUpFormFields = [
   "status", "scheduledFor", "technicianId", "reason", "reasonNote", "isCallback", "labourHours", "materialsCost", "outcome", "outcomeNote",
+  "arrivalStart", "arrivalEnd", "customerPrep", "workDone",
 ] as const satisfies readonly (keyof FollowUpFormValues)[];
 
 const text = (value: number | string | null) => (value === null ? "" : String(value));
@@ -68,6 +78,10 @@ export function formValuesOf(followUp: FollowUp, status: FollowUp["status"] = fo
     materialsCost: text(followUp.materialsCost),
     outcome: followUp.outcome,
     outcomeNote: text(followUp.outcomeNote),
+    arrivalStart: text(followUp.arrivalStart),
+    arrivalEnd: text(followUp.arrivalEnd),
+    customerPrep: text(followUp.customerPrep),
+    workDone: text(followUp.workDone),
   };
 }
 
@@ -80,6 +94,11 @@ export function patchOf(current: FollowUp, values: FollowUpFormValues): UpdateFo
     reason: values.reason,
     reasonNote: textOrNull(values.reasonNote),
     isCallback: values.isCallback,
+    // A time input may carry seconds in some browsers; the API takes HH:MM.
+    arrivalStart: textOrNull(values.arrivalStart.slice(0, 5)),
+    arrivalEnd: textOrNull(values.arrivalEnd.slice(0, 5)),
+    customerPrep: textOrNull(values.customerPrep),
+    workDone: textOrNull(values.workDone),
     // Only a callback carries a cost and an outcome; the server clears them when it stops being one.
     ...(values.isCallback
       ? {

@@ -1,7 +1,8 @@
 import { useState } from "react";
 import { useForm } from "react-hook-form";
-import { FOLLOW_UP_REASONS, followUpReasonLabels, type FollowUp } from "#shared/schemas/follow-ups";
+import { FOLLOW_UP_REASONS, followUpReasonLabels, type FollowUp, type FollowUpReason } from "#shared/schemas/follow-ups";
 import { Button, CheckboxField, Notice, SelectField, TextAreaField, TextField, applyServerErrors, localToday, useSignedInUser } from "#shared/ui/index";
+import { HomeownerVisitFields } from "../../../common/components/homeowner-visit-fields.tsx";
 import { useCreateFollowUp } from "../api/create-follow-up.ts";
 import { useTeam } from "../api/get-team.ts";
 import { emptyFollowUpForm, followUpFormFields, toFollowUpBody, type FollowUpContext, type FollowUpFormValues } from "../lib/follow-up-form.ts";
@@ -17,7 +18,7 @@ export function FollowUpForm({ context, onBooked, onCancel }: FollowUpFormProps)
   const user = useSignedInUser();
   const team = useTeam(user.role === "manager");
   const create = useCreateFollowUp();
-  const { register, handleSubmit, setError, formState } = useForm<FollowUpFormValues>({ defaultValues: { ...emptyFollowUpForm, technicianId: user.role === "technician" ? String(user.id) : "" } });
+  const { register, handleSubmit, setError, setValue, watch, formState } = useForm<FollowUpFormValues>({ defaultValues: { ...emptyFollowUpForm, technicianId: user.role === "technician" ? String(user.id) : "" } });
   const [formMessage, setFormMessage] = useState<string | null>(null);
   const errors = formState.errors;
 
@@ -56,6 +57,13 @@ export function FollowUpForm({ context, onBooked, onCancel }: FollowUpFormProps)
       <TextField label="Date (optional)" type="date" min={localToday()} error={errors.scheduledFor?.message} {...register("scheduledFor")} />
       <SelectField label="Technician" placeholderOption="Not assigned yet" error={errors.technicianId?.message} options={technicianOptions} {...register("technicianId")} />
       <p className="-mt-2 text-base text-ink-soft">With a date and a technician it is scheduled; otherwise it waits as requested.</p>
+      <HomeownerVisitFields
+        start={{ error: errors.arrivalStart?.message, ...register("arrivalStart") }}
+        end={{ error: errors.arrivalEnd?.message, ...register("arrivalEnd") }}
+        prep={{ error: errors.customerPrep?.message, ...register("customerPrep") }}
+        reason={watch("reason") as FollowUpReason | ""}
+        onSuggest={(text) => setValue("customerPrep", text, { shouldDirty: true })}
+      />
       <CheckboxField label="This is a callback" hint="A free return visit because the result failed." {...register("isCallback")} />
       <div className="flex flex-wrap gap-2">
         <Button type="submit" pending={create.isPending} pendingLabel="Booking…">
