@@ -15,7 +15,7 @@ import { CAUTION_IDS, CAUTIONS, type CautionId } from "./tables/cautions.ts";
 import type { HoldOff, PhaseRange, Plan, PlanStep } from "./types.ts";
 
 /** Bump when the same input would produce a different plan, so stored plans can be told apart. */
-export const ENGINE_VERSION = 1;
+export const ENGINE_VERSION = 2;
 
 /** Steps the homeowner reported skipping keep their place in the plan, marked skipped. */
 function applySkips(ctx: PlanContext, steps: PlanStep[]): PlanStep[] {

@@ -20,9 +20,10 @@ const frostWhy: Why = {
 export function wateringNotes(ctx: PlanContext): PlanStep[] {
   const { timeline } = ctx;
   const notes: PlanStep[] = [];
-  // Only announced in the maturing phase: earlier, seedlings still need their
-  // water and the frost warning already covers the risk.
-  if (ctx.frostDay !== null && ctx.frostDay > timeline.establishmentEnd && ctx.frostDay <= timeline.planEnd) {
+  // Announced once light watering is over, since every later watering stops
+  // at the frost; during germination the seed still needs its water and the
+  // frost warning already covers the risk.
+  if (ctx.frostDay !== null && ctx.frostDay > (timeline.germinationEnd ?? 0) && ctx.frostDay <= timeline.planEnd) {
     notes.push({
       key: oneOffKey("note", "frost_stop_watering"),
       date: ctx.dateOf(ctx.frostDay),
