@@ -14,5 +14,6 @@ export const SOURCES = {
   nist811: "NIST SP 811",
   tradePractice: "Lawn-care trade practice (no single source)",
   productLabel: "The product label",
+  ifasTexasAmIrrigation: "University of Florida IFAS and Texas A&M AgriLife irrigation guides",
   sproutlineChoice: "Sproutline default, chosen within the trade's range",
 } as const;

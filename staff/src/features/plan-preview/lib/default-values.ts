@@ -30,7 +30,7 @@ export function defaultPreviewValues(visitDate = nextAutumnVisitDate()): Preview
     property: {
       grassType: { species: ["tall_fescue"], season: "" },
       lawnCondition: "thin",
-      irrigation: { kind: "in_ground", zones: "4", precipitationRateInPerHour: "" },
+      irrigation: { kind: "in_ground", sprinklerType: "", zones: "4", precipitationRateInPerHour: "" },
       currentMowingHeightIn: "4",
       mowerHighestSettingIn: "4",
       mowerSettingStepIn: "0.5",

@@ -1,4 +1,4 @@
-import type { Service, Species } from "#shared/engine/index";
+import type { Service, Species, SprinklerType } from "#shared/engine/index";
 
 /*
  * What the form holds. Numbers stay as the text the person typed, so a half-typed
@@ -38,7 +38,8 @@ export interface PreviewFormValues {
   property: {
     grassType: { species: Species[]; season: "" | "cool" | "warm" };
     lawnCondition: LawnCondition;
-    irrigation: { kind: IrrigationKind; zones: string; precipitationRateInPerHour: string };
+    /** Empty when the crew does not know the sprinkler type. */
+    irrigation: { kind: IrrigationKind; sprinklerType: "" | SprinklerType; zones: string; precipitationRateInPerHour: string };
     currentMowingHeightIn: string;
     mowerHighestSettingIn: string;
     mowerSettingStepIn: string;

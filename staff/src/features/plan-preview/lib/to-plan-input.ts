@@ -61,6 +61,7 @@ export function checkPreviewForm(values: PreviewFormValues): FormCheck {
       // Zones and sprinkler rate mean nothing without a sprinkler; the form keeps them in case it comes back.
       irrigation: {
         kind: irrigation.kind,
+        ...(hasSprinkler && irrigation.sprinklerType ? { sprinklerType: irrigation.sprinklerType } : {}),
         ...(hasSprinkler ? { zones: num("property.irrigation.zones", irrigation.zones, false) } : {}),
         ...(hasSprinkler
           ? { precipitationRateInPerHour: num("property.irrigation.precipitationRateInPerHour", irrigation.precipitationRateInPerHour, false) }
