@@ -5,6 +5,7 @@ import { holdOffEndSteps, holdOffsFor, holdOffWindows } from "./rules/hold-offs.
 import { mowingSteps } from "./rules/mowing.ts";
 import { prepSteps } from "./rules/prep.ts";
 import { leafCleanupSteps, thatchCleanupSteps } from "./rules/seasonal.ts";
+import { nitrogenWarnings } from "./rules/nitrogen-warnings.ts";
 import { planWarnings } from "./rules/warnings.ts";
 import { wateringSteps } from "./rules/watering.ts";
 import { hashInput } from "./hash.ts";
@@ -83,7 +84,7 @@ export function generatePlan(input: PlanInput): Plan {
     prepSteps: prep,
     steps,
     holdOffs,
-    warnings: planWarnings(ctx),
+    warnings: [...planWarnings(ctx), ...nitrogenWarnings(ctx)],
     summary: calculatorSummary(ctx),
     cautions: cautionsUsed([prep, steps, holdOffs]),
   };

@@ -3,7 +3,7 @@ import type { PlanContext } from "../context.ts";
 import { formatNumber } from "../format.ts";
 import type { ProductApplied } from "../schemas/plan-input.ts";
 import { oneOffKey } from "../step-keys.ts";
-import { AUTUMN_FEEDING_N, SINGLE_FEEDING_N, STARTER_FEEDING } from "../tables/feeding.ts";
+import { AUTUMN_FEEDING_N, HIGH_N_QUICK_RELEASE_RULE, SINGLE_FEEDING_N, STARTER_FEEDING } from "../tables/feeding.ts";
 import { AUTUMN_MONTHS } from "../tables/timing.ts";
 import { monthOfDayNumber } from "../dates.ts";
 import type { PlanStep } from "../types.ts";
@@ -16,13 +16,22 @@ export function isStarterProduct(product: ProductApplied): boolean {
   return product.analysis.p > 0 && product.analysis.p >= product.analysis.n;
 }
 
+/** Pounds of nitrogen per 1,000 ft² one product puts down: rate × N % (Nebraska Backyard Farmer, "Lawn Fertilizer Calculations"). */
+export function nitrogenLbPer1000(product: ProductApplied): number {
+  return (product.rateLbPer1000 * product.analysis.n) / 100;
+}
+
 /**
- * "High-N quick-release": flagged quick-release and nitrogen the largest of
- * the three grades. The references give no percentage threshold, so the
- * bag's own balance decides rather than an invented cut-off.
+ * "High-N quick-release" (HIGH_N_QUICK_RELEASE_RULE): nitrogen the largest of
+ * the three grades, and flagged quick-release or put down at a full feeding's
+ * worth or more. The references give no percentage threshold, so the bag's
+ * own balance and the published per-application amount decide rather than
+ * an invented cut-off.
  */
 export function isHighNQuickRelease(product: ProductApplied): boolean {
-  return product.quickReleaseN === true && product.analysis.n > product.analysis.p && product.analysis.n > product.analysis.k;
+  const nitrogenLed = product.analysis.n > product.analysis.p && product.analysis.n > product.analysis.k;
+  if (!nitrogenLed) return false;
+  return product.quickReleaseN === true || nitrogenLbPer1000(product) >= HIGH_N_QUICK_RELEASE_RULE.fullFeedingLbNPer1000 - 1e-9;
 }
 
 export function starterAppliedAtVisit(ctx: PlanContext): boolean {

@@ -24,8 +24,16 @@ export const AUTUMN_FEEDING_N = {
   provenance: "common practice",
 } as const;
 
-/** High-nitrogen quick-release feeds burn and push soft growth on new seed. */
+/**
+ * High-nitrogen quick-release feeds burn and push soft growth on new seed.
+ * Recognised from the bag and the rate, no tick needed: nitrogen the largest
+ * of the three grades, and either marked quick-release or put down at a full
+ * feeding's worth (¾ lb N per 1,000 ft², the low end of a typical single
+ * application) or more in one go. A form's unticked box cannot tell "slow-
+ * release" from "not asked", so it never clears a product.
+ */
 export const HIGH_N_QUICK_RELEASE_RULE = {
+  fullFeedingLbNPer1000: SINGLE_FEEDING_N.minLbPer1000,
   source: SOURCES.tradePractice,
   provenance: "common practice",
 } as const;
