@@ -3,7 +3,7 @@ import { checkInSteps } from "./rules/check-ins.ts";
 import { feedingSteps } from "./rules/feeding.ts";
 import { holdOffEndSteps, holdOffsFor, holdOffWindows } from "./rules/hold-offs.ts";
 import { mowingSteps } from "./rules/mowing.ts";
-import { prepSteps } from "./rules/prep.ts";
+import { aerationCoreSteps, prepSteps } from "./rules/prep.ts";
 import { leafCleanupSteps, thatchCleanupSteps } from "./rules/seasonal.ts";
 import { nitrogenWarnings } from "./rules/nitrogen-warnings.ts";
 import { planWarnings } from "./rules/warnings.ts";
@@ -58,6 +58,7 @@ export function generatePlan(input: PlanInput): Plan {
   const steps = sortSteps(
     applySkips(ctx, [
       ...thatchCleanupSteps(ctx),
+      ...aerationCoreSteps(ctx),
       ...wateringSteps(ctx),
       ...mowingSteps(ctx),
       ...feedingSteps(ctx, windows),

@@ -39,6 +39,8 @@ export const productAppliedSchema = z.object({
   analysis: analysisSchema,
   rateLbPer1000: z.number().gt(0, "Must be more than 0").max(100, "Must be at most 100 lb per 1,000 ft²"),
   quickReleaseN: z.boolean().optional(),
+  /** Organic (natural) fertilizers suit new seed as a starter does. */
+  organic: z.boolean().optional(),
 });
 
 export const visitSchema = z

@@ -8,11 +8,16 @@ export const SINGLE_FEEDING_N = {
   provenance: "published",
 } as const;
 
-/** New seedings: a phosphorus-rich starter supplying about 1–1.5 lb P per 1,000 ft². */
+/**
+ * New seedings: a phosphorus-rich starter supplying about 1–1.5 lb P per
+ * 1,000 ft², or an organic fertilizer. Bags show phosphate (P₂O₅), so the
+ * homeowner is told the phosphate too (P = P₂O₅ × 0.4364, published).
+ */
 export const STARTER_FEEDING = {
   minPLbPer1000: 1,
   maxPLbPer1000: 1.5,
   source: SOURCES.nebraskaColumn2021,
+  conversionSource: SOURCES.phosphateConversion,
   provenance: "published",
 } as const;
 

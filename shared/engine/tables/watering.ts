@@ -62,3 +62,10 @@ export const WEEKLY_WATER_NEED = {
   source: SOURCES.tradePractice,
   provenance: "common practice",
 } as const;
+
+/** Aerate moist soil (water the day before if dry) and leave the cores to break down. */
+export const AERATION_PREP_RULE = {
+  waterBeforeIn: 0.5,
+  source: SOURCES.tradePractice,
+  provenance: "common practice",
+} as const;
