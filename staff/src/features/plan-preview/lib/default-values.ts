@@ -24,7 +24,7 @@ export function defaultPreviewValues(visitDate = nextAutumnVisitDate()): Preview
       seedRateLbPer1000: "5",
       areaFt2: "6000",
       products: [
-        { name: "Starter 18-24-12", analysis: { n: "18", p: "24", k: "12" }, rateLbPer1000: "4", quickReleaseN: false },
+        { name: "Starter 18-24-12", analysis: { n: "18", p: "24", k: "12" }, rateLbPer1000: "4", quickReleaseN: false, organic: false },
       ],
     },
     property: {

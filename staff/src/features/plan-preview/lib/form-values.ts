@@ -18,6 +18,7 @@ export interface ProductRowValues {
   analysis: { n: string; p: string; k: string };
   rateLbPer1000: string;
   quickReleaseN: boolean;
+  organic: boolean;
 }
 
 export type LawnCondition = "thin" | "bare" | "thick_dormant" | "thick";
@@ -59,4 +60,5 @@ export const emptyProductRow = (): ProductRowValues => ({
   analysis: { n: "", p: "", k: "" },
   rateLbPer1000: "",
   quickReleaseN: false,
+  organic: false,
 });

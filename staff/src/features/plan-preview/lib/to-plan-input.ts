@@ -50,6 +50,7 @@ export function checkPreviewForm(values: PreviewFormValues): FormCheck {
         },
         rateLbPer1000: num(`visit.products.${i}.rateLbPer1000`, row.rateLbPer1000, true) as number,
         ...(row.quickReleaseN ? { quickReleaseN: true } : {}),
+        ...(row.organic ? { organic: true } : {}),
       })),
     },
     property: {
