@@ -116,14 +116,25 @@ export function depthPerWatering(ctx: PlanContext, perWeek: number): number {
   return Math.min(ctx.program.deepWateringDepthIn, WEEKLY_WATER_NEED.inches / perWeek);
 }
 
+/** One kind of watering, its texts composed once per plan rather than once per step. */
 interface DeepWatering {
   readonly depthIn: number;
   readonly minutes: number;
+  readonly depthText: string;
+  /** How to water it: by hose, or how long each zone runs. */
+  readonly howText: string;
 }
 
 function deepWatering(ctx: PlanContext, perWeek: number): DeepWatering {
   const depthIn = depthPerWatering(ctx, perWeek);
-  return { depthIn, minutes: wholeMinutes(depthIn, ctx.precipitationRate) };
+  const minutes = wholeMinutes(depthIn, ctx.precipitationRate);
+  const byHand = ctx.input.property.irrigation.kind === "none";
+  return {
+    depthIn,
+    minutes,
+    depthText: formatNumber(depthIn, 2),
+    howText: byHand ? " A hose-end sprinkler moved around the lawn does this more evenly than hand watering." : zonesSentence(ctx, minutes),
+  };
 }
 
 function deepStep(ctx: PlanContext, day: number, deep: DeepWatering, deepStart: readonly StartTime[], title?: string): PlanStep {
@@ -137,8 +148,7 @@ function deepStep(ctx: PlanContext, day: number, deep: DeepWatering, deepStart: 
     kind: "water",
     title: title ?? (byHand ? "Water deeply today" : `Water deeply today, ${minutes} minutes ${wherePhrase(ctx)}`),
     detail:
-      `Put down about ${formatNumber(deep.depthIn, 2)} inch of water, early in the morning: about ${WEEKLY_WATER_NEED.inches} inch a week in all, rain included. Skip it if it rained that much since the last watering.` +
-      (byHand ? " A hose-end sprinkler moved around the lawn does this more evenly than hand watering." : zonesSentence(ctx, minutes)),
+      `Put down about ${deep.depthText} inch of water, early in the morning: about ${WEEKLY_WATER_NEED.inches} inch a week in all, rain included. Skip it if it rained that much since the last watering.${deep.howText}`,
     times: realTimes(ctx, day, deepStart),
     minutesPerCycle: minutes,
     why: deepWhy,
@@ -167,8 +177,7 @@ function taperStep(ctx: PlanContext, day: number, stage: TaperStage, first: bool
     kind: "water",
     title,
     detail:
-      `Put down about ${formatNumber(deep.depthIn, 2)} inch, early in the morning, so the soil stays damp below the surface between waterings. Skip it if it rained that much since the last watering.` +
-      (byHand ? " A hose-end sprinkler moved around the lawn does this more evenly than hand watering." : zonesSentence(ctx, deep.minutes)),
+      `Put down about ${deep.depthText} inch, early in the morning, so the soil stays damp below the surface between waterings. Skip it if it rained that much since the last watering.${deep.howText}`,
     times: realTimes(ctx, day, deepStart),
     minutesPerCycle: deep.minutes,
     why: taperWhy,
