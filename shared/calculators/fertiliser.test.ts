@@ -1,6 +1,14 @@
 import { describe, expect, it } from "vitest";
 import { CalculatorInputError } from "./errors.ts";
-import { bagsNeeded, nutrientsDelivered, productPerThousand, totalProduct } from "./fertiliser.ts";
+import {
+  bagsNeeded,
+  nutrientsDelivered,
+  phosphateFromPhosphorus,
+  phosphorusFromPhosphate,
+  PHOSPHORUS_PER_PHOSPHATE,
+  productPerThousand,
+  totalProduct,
+} from "./fertiliser.ts";
 
 describe("productPerThousand and totalProduct", () => {
   it("1.0 lb N from 28-3-6 needs 3.57 lb/1,000 ft², 21.4 lb on 6,000 ft² (University of Nebraska–Lincoln, Backyard Farmer, 'Lawn Fertilizer Calculations')", () => {
@@ -65,5 +73,22 @@ describe("nutrientsDelivered", () => {
     } catch (error) {
       expect((error as CalculatorInputError).field).toBe("analysis.n");
     }
+  });
+});
+
+describe("phosphate (P₂O₅) and phosphorus (P)", () => {
+  it("P = P₂O₅ × 0.4364 (published labelling conversion), which the atomic masses confirm (P 30.974, O 15.999)", () => {
+    expect(PHOSPHORUS_PER_PHOSPHATE).toBe(0.4364);
+    expect((2 * 30.974) / (2 * 30.974 + 5 * 15.999)).toBeCloseTo(PHOSPHORUS_PER_PHOSPHATE, 4);
+  });
+
+  it("24 lb of P₂O₅ is 10.47 lb of P, and 1 lb of P is 2.29 lb of P₂O₅", () => {
+    expect(phosphorusFromPhosphate(24)).toBeCloseTo(10.4736, 4);
+    expect(phosphateFromPhosphorus(1)).toBeCloseTo(2.2915, 4);
+    expect(phosphorusFromPhosphate(phosphateFromPhosphorus(1.5))).toBeCloseTo(1.5, 12);
+  });
+
+  it("refuses negative amounts", () => {
+    expect(() => phosphorusFromPhosphate(-1)).toThrow(CalculatorInputError);
   });
 });

@@ -72,3 +72,20 @@ export function nutrientsDelivered(
     total: { n: perThousand.n * scale, p: perThousand.p * scale, k: perThousand.k * scale },
   };
 }
+
+/**
+ * A bag's middle number is phosphate (P₂O₅); elemental phosphorus is 0.4364
+ * of it (standard fertilizer-labelling conversion from atomic masses:
+ * 2 × 30.974 ÷ (2 × 30.974 + 5 × 15.999)).
+ */
+export const PHOSPHORUS_PER_PHOSPHATE = 0.4364;
+
+export function phosphorusFromPhosphate(p2o5Lb: number): number {
+  requireNonNegative("p2o5Lb", p2o5Lb);
+  return p2o5Lb * PHOSPHORUS_PER_PHOSPHATE;
+}
+
+export function phosphateFromPhosphorus(pLb: number): number {
+  requireNonNegative("pLb", pLb);
+  return pLb / PHOSPHORUS_PER_PHOSPHATE;
+}

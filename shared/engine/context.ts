@@ -4,6 +4,7 @@ import { SEEDING_SERVICES, type PlanInput, type Service } from "./schemas/plan-i
 import type { ProgramSettings } from "./schemas/program-settings.ts";
 import { dateOfKey } from "./step-keys.ts";
 import { SPECIES_FACTS, type Season } from "./tables/species.ts";
+import { HOSE_END_DEFAULT, SPRINKLER_DEFAULTS, type SprinklerDefault } from "./tables/sprinklers.ts";
 import { hemisphereOfZone, type Hemisphere } from "./tables/timing.ts";
 import { computeTimeline, phaseOfDay, type Timeline } from "./timeline.ts";
 import type { Phase } from "./types.ts";
@@ -23,6 +24,8 @@ export interface PlanContext {
   readonly lawnSeason: Season | "mixed";
   readonly precipitationRate: number;
   readonly precipitationRateMeasured: boolean;
+  /** The sprinkler's typical range the rate was taken from; null when measured or the program default. */
+  readonly sprinklerDefault: SprinklerDefault | null;
   readonly rainDays: ReadonlySet<number>;
   readonly skippedKeys: ReadonlySet<string>;
   readonly sproutsSeenDay: number | null;
@@ -42,12 +45,20 @@ function lawnSeasonOf(input: PlanInput): Season | "mixed" {
   return "mixed";
 }
 
+/** A sprinkler of known type (or a hose-end one) has a typical rate; an in-ground system of unknown type does not. */
+function sprinklerDefaultOf(irrigation: PlanInput["property"]["irrigation"]): SprinklerDefault | null {
+  if (irrigation.precipitationRateInPerHour !== undefined || irrigation.kind === "none") return null;
+  if (irrigation.sprinklerType) return SPRINKLER_DEFAULTS[irrigation.sprinklerType];
+  return irrigation.kind === "hose_end" ? HOSE_END_DEFAULT : null;
+}
+
 export function buildContext(input: PlanInput): PlanContext {
   const { visit, property, program, options } = input;
   const visitDay = toDayNumber(visit.date);
   const services = new Set(visit.services);
   const seeding = visit.seedMix.length > 0 || visit.services.some((s) => SEEDING_SERVICES.includes(s));
   const mix = seeding ? mixFacts(visit.seedMix) : null;
+  const sprinklerDefault = sprinklerDefaultOf(property.irrigation);
 
   let sproutsSeenDay: number | null = null;
   const rainDays = new Set<number>();
@@ -79,8 +90,10 @@ export function buildContext(input: PlanInput): PlanContext {
     seeding,
     mix,
     lawnSeason: lawnSeasonOf(input),
-    precipitationRate: property.irrigation.precipitationRateInPerHour ?? program.defaultPrecipitationRateInPerHour,
+    precipitationRate:
+      property.irrigation.precipitationRateInPerHour ?? sprinklerDefault?.assumedInPerHour ?? program.defaultPrecipitationRateInPerHour,
     precipitationRateMeasured: property.irrigation.precipitationRateInPerHour !== undefined,
+    sprinklerDefault,
     rainDays,
     skippedKeys,
     sproutsSeenDay,

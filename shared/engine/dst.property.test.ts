@@ -48,9 +48,10 @@ describe("watering times across spring-forward days (America/New_York, Europe/Be
   });
 
   it("a 02:30 deep-watering start is moved on the change day in the establishment phase too", () => {
-    // Visit on 2026-02-21: 14 days of light watering end 03-07, so the first deep watering is on the change day.
+    // Visit on 2026-02-14: light watering runs through the first mowing on day 21 (03-07), so the first
+    // once-a-day watering of the taper, at the deep-watering time, is on the change day.
     const plan = generatePlan(
-      valid(withChanges({ visit: { date: "2026-02-21" }, property: { expectedFirstFrost: undefined }, program: { deepWateringTime: "02:30", establishmentWateringsPerWeek: 3 } })),
+      valid(withChanges({ visit: { date: "2026-02-14" }, property: { expectedFirstFrost: undefined }, program: { deepWateringTime: "02:30", establishmentWateringsPerWeek: 3 } })),
     );
     const deep = plan.steps.filter((s) => s.kind === "water" && s.phase !== "germination");
     expect(deep.some((s) => s.date === "2026-03-08")).toBe(true);

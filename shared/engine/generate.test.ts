@@ -27,14 +27,16 @@ describe("germination watering", () => {
     expect(planFor().steps.filter((s) => s.key === "note:catch_can_test")).toHaveLength(1);
   });
 
-  it("keeps light watering every day for at least 14 days (Nebraska Extension 2021; 2-week minimum common practice)", () => {
+  it("keeps light watering every day for at least 14 days and through the first mowing (Nebraska Extension 2021; 2-week minimum common practice)", () => {
     const plan = planFor();
     const lightDays = plan.steps.filter((s) => s.kind === "water" && (s.times?.length ?? 0) >= 2);
     expect(lightDays.length).toBeGreaterThanOrEqual(14);
-    expect(plan.meta.germinationWateringEnds).toBe("2026-09-24");
+    // Tall fescue: up by day 14 at the latest, mowable 7 days later (common practice) → first mowing on day 21.
+    expect(plan.meta.firstMowDate).toBe("2026-10-01");
+    expect(plan.meta.germinationWateringEnds).toBe("2026-10-01");
   });
 
-  it("keeps light watering until Kentucky bluegrass can be up (emergence up to 30 days, from memory) when it is in the mix", () => {
+  it("keeps light watering until Kentucky bluegrass (emergence up to 30 days, from memory) is up and mowable when it is in the mix", () => {
     const raw = withChanges({
       visit: {
         seedMix: [
@@ -43,16 +45,45 @@ describe("germination watering", () => {
         ],
       },
     });
-    expect(planFor(raw).meta.germinationWateringEnds).toBe(addDays("2026-09-10", 30));
+    // Up by day 30, mowable 7 days later: light watering through day 37.
+    expect(planFor(raw).meta.germinationWateringEnds).toBe(addDays("2026-09-10", 37));
   });
 
-  it("then switches to 2–3 deep waterings a week (Nebraska Extension 2021)", () => {
+  it("after the first mowing tapers: a week once a day, a week every other day (taper steps common practice)", () => {
+    const plan = planFor();
+    const water = plan.steps.filter((s) => s.kind === "water" && s.phase === "establishment");
+    const days = water.map((s) => daysBetween("2026-09-10", s.date));
+    expect(days.filter((d) => d >= 22 && d <= 28)).toEqual([22, 23, 24, 25, 26, 27, 28]);
+    expect(days.filter((d) => d >= 29 && d <= 35)).toEqual([29, 31, 33, 35]);
+    const onceADay = water.find((s) => s.date === "2026-10-02");
+    expect(onceADay?.title).toBe("From today, water once a day: 9 minutes per zone");
+    expect(onceADay?.times).toEqual(["06:00"]);
+    // About 1 in a week (common practice) over 7 waterings: 1/7 in ÷ 1.0 in/h × 60 ≈ 8.6 → 9 minutes.
+    expect(onceADay?.minutesPerCycle).toBe(9);
+    // Over 3.5 waterings a week: 2/7 in ÷ 1.0 in/h × 60 ≈ 17.1 → 17 minutes.
+    expect(water.find((s) => s.date === "2026-10-09")?.minutesPerCycle).toBe(17);
+  });
+
+  it("then switches to 2–3 deep waterings a week that add up to about 1 inch (Nebraska Extension 2021; 1 in a week common practice)", () => {
     const plan = planFor();
     const establishment = plan.steps.filter((s) => s.kind === "water" && s.phase === "establishment");
-    const firstWeek = establishment.filter((s) => daysBetween("2026-09-25", s.date) < 7);
+    const firstWeek = establishment.filter((s) => s.date >= "2026-10-16" && daysBetween("2026-10-16", s.date) < 7);
     expect(firstWeek.length).toBeGreaterThanOrEqual(2);
     expect(firstWeek.length).toBeLessThanOrEqual(3);
-    expect(firstWeek[0]?.minutesPerCycle).toBe(30); // 0.5 in ÷ 1.0 in/h × 60
+    expect(firstWeek[0]?.title).toBe("Switch to deep watering: 20 minutes per zone today");
+    expect(firstWeek[0]?.minutesPerCycle).toBe(20); // 1 in ÷ 3 waterings ÷ 1.0 in/h × 60
+    const weeklyMinutes = firstWeek.reduce((sum, s) => sum + (s.minutesPerCycle ?? 0), 0);
+    expect(weeklyMinutes).toBe(60); // 60 minutes at 1.0 in/h = 1 inch
+    expect(firstWeek[0]?.detail).toMatch(/about 0\.33 inch .*about 1 inch a week in all/);
+  });
+
+  it("keeps maturing waterings to about 1 inch a week too, and never deeper than the program's deep-watering depth", () => {
+    const plan = planFor(withChanges({ property: { expectedFirstFrost: undefined }, program: { maturingWateringsPerWeek: 2 } }));
+    const maturing = plan.steps.filter((s) => s.kind === "water" && s.phase === "maturing");
+    expect(maturing.length).toBeGreaterThan(0);
+    for (const s of maturing) expect(s.minutesPerCycle).toBe(30); // 1 in ÷ 2 = 0.5 in (the default depth) → 30 minutes at 1 in/h
+    const shallow = planFor(withChanges({ property: { expectedFirstFrost: undefined }, program: { maturingWateringsPerWeek: 1, deepWateringDepthIn: 0.75 } }));
+    for (const s of shallow.steps.filter((s) => s.kind === "water" && s.phase === "maturing")) expect(s.minutesPerCycle).toBe(45);
   });
 
   it("turns a heavy-rain day's watering into a skip note and leaves the next day alone", () => {
@@ -152,12 +183,21 @@ describe("feeding and hold-offs", () => {
 
 describe("first frost", () => {
   it("stops regular watering at the expected first frost once the seedlings are past establishment", () => {
-    // 14 days light watering + 28 establishment → maturing from 2026-09-27 to 2026-10-24.
+    // Light watering through the first mowing (day 21) + 28 establishment → maturing from 2026-10-04.
     const raw = withChanges({ visit: { date: "2026-08-15" }, property: { expectedFirstFrost: "2026-10-10" } });
     const plan = planFor(raw);
     expect(plan.steps.find((s) => s.key === "note:frost_stop_watering")?.date).toBe("2026-10-10");
     expect(plan.steps.filter((s) => s.kind === "water" && s.date >= "2026-10-10")).toEqual([]);
     expect(plan.meta.planEnds > "2026-10-10").toBe(true);
+  });
+
+  it("stops establishment watering (taper and deep) at the expected first frost, and says so (common practice)", () => {
+    const plan = planFor(withChanges({ property: { expectedFirstFrost: "2026-10-20" } }));
+    expect(plan.meta.germinationWateringEnds).toBe("2026-10-01");
+    expect(plan.steps.filter((s) => s.kind === "water" && s.date >= "2026-10-20")).toEqual([]);
+    // Deep waterings from 10-16 on days 0, 2, 4 of each week: 10-16, 10-18, then 10-20 falls on the frost.
+    expect(plan.steps.filter((s) => s.kind === "water" && s.date >= "2026-10-16").map((s) => s.date)).toEqual(["2026-10-16", "2026-10-18"]);
+    expect(plan.steps.find((s) => s.key === "note:frost_stop_watering")?.date).toBe("2026-10-20");
   });
 });
 

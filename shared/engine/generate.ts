@@ -3,8 +3,9 @@ import { checkInSteps } from "./rules/check-ins.ts";
 import { feedingSteps } from "./rules/feeding.ts";
 import { holdOffEndSteps, holdOffsFor, holdOffWindows } from "./rules/hold-offs.ts";
 import { mowingSteps } from "./rules/mowing.ts";
-import { prepSteps } from "./rules/prep.ts";
+import { aerationCoreSteps, prepSteps } from "./rules/prep.ts";
 import { leafCleanupSteps, thatchCleanupSteps } from "./rules/seasonal.ts";
+import { nitrogenWarnings } from "./rules/nitrogen-warnings.ts";
 import { planWarnings } from "./rules/warnings.ts";
 import { wateringSteps } from "./rules/watering.ts";
 import { hashInput } from "./hash.ts";
@@ -15,7 +16,7 @@ import { CAUTION_IDS, CAUTIONS, type CautionId } from "./tables/cautions.ts";
 import type { HoldOff, PhaseRange, Plan, PlanStep } from "./types.ts";
 
 /** Bump when the same input would produce a different plan, so stored plans can be told apart. */
-export const ENGINE_VERSION = 1;
+export const ENGINE_VERSION = 2;
 
 /** Steps the homeowner reported skipping keep their place in the plan, marked skipped. */
 function applySkips(ctx: PlanContext, steps: PlanStep[]): PlanStep[] {
@@ -57,6 +58,7 @@ export function generatePlan(input: PlanInput): Plan {
   const steps = sortSteps(
     applySkips(ctx, [
       ...thatchCleanupSteps(ctx),
+      ...aerationCoreSteps(ctx),
       ...wateringSteps(ctx),
       ...mowingSteps(ctx),
       ...feedingSteps(ctx, windows),
@@ -83,7 +85,7 @@ export function generatePlan(input: PlanInput): Plan {
     prepSteps: prep,
     steps,
     holdOffs,
-    warnings: planWarnings(ctx),
+    warnings: [...planWarnings(ctx), ...nitrogenWarnings(ctx)],
     summary: calculatorSummary(ctx),
     cautions: cautionsUsed([prep, steps, holdOffs]),
   };

@@ -49,6 +49,7 @@ export { SPECIES, SPECIES_FACTS, OVERSEEDING_TO_NEW_SEEDING_RATIO, type Species,
 export { CAUTIONS, CAUTION_IDS, type Caution, type CautionId } from "./tables/cautions.ts";
 export { SOURCES } from "./tables/sources.ts";
 export type { Provenance, Sourced, SourcedRange, Why } from "./tables/provenance.ts";
+export { SPRINKLER_TYPES, SPRINKLER_DEFAULTS, HOSE_END_DEFAULT, type SprinklerType, type SprinklerDefault } from "./tables/sprinklers.ts";
 export { FROST_RULE, hemisphereOfZone, type Hemisphere } from "./tables/timing.ts";
 export { addDays, daysBetween, isValidIsoDate, isValidLocalTime, type IsoDate } from "./dates.ts";
 export { isRealLocalTime, nearestRealLocalTime, isValidTimeZone } from "./zone-time.ts";

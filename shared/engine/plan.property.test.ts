@@ -27,7 +27,8 @@ const validInputArb = planInputArb.map((raw) => {
 const RUNS = { numRuns: 150 };
 const allSteps = (plan: Plan): PlanStep[] => [...plan.prepSteps, ...plan.steps];
 
-describe("care plan invariants (property-based)", () => {
+// Each property generates hundreds of plans; on a busy shared machine that can pass the 5 s default.
+describe("care plan invariants (property-based)", { timeout: 30_000 }, () => {
   it("every generated arbitrary input is valid (guards the generators themselves)", () => {
     fc.assert(
       fc.property(planInputArb, (raw) => {
@@ -92,6 +93,41 @@ describe("care plan invariants (property-based)", () => {
         if (!plan.meta.seeding) return;
         const lastDay = daysBetween(input.visit.date, plan.meta.germinationWateringEnds ?? input.visit.date);
         expect(lastDay).toBeGreaterThanOrEqual(Math.max(14, input.program.germinationDays));
+      }),
+      RUNS,
+    );
+  });
+
+  it("light watering never ends before the first mowing, whatever the date, zone, mix or observations (Nebraska Extension 2021)", () => {
+    fc.assert(
+      fc.property(validInputArb, (input) => {
+        const plan = generatePlan(input);
+        if (!plan.meta.seeding) return;
+        const { firstMowDate, germinationWateringEnds } = plan.meta;
+        expect(firstMowDate).not.toBeNull();
+        expect(germinationWateringEnds! >= firstMowDate!).toBe(true);
+        // Every day up to the first mowing has its light cycles (or a rain note standing in for them). Counted by
+        // phase, not by start times: two small-hours starts can merge into one on a spring-forward day.
+        const lightOrRain = new Set(
+          plan.steps.filter((s) => (s.kind === "water" && s.phase === "germination") || s.key.endsWith(":rain")).map((s) => s.date),
+        );
+        for (let day = 1; addDays(input.visit.date, day) <= firstMowDate!; day++) {
+          expect(lightOrRain.has(addDays(input.visit.date, day)), addDays(input.visit.date, day)).toBe(true);
+        }
+      }),
+      RUNS,
+    );
+  });
+
+  it("no watering after the expected first frost but germination's light cycles (common practice)", () => {
+    fc.assert(
+      fc.property(validInputArb, (input) => {
+        const frost = input.property.expectedFirstFrost;
+        if (frost === undefined) return;
+        const plan = generatePlan(input);
+        for (const s of plan.steps) {
+          if (s.kind === "water" && s.date >= frost) expect(s.phase, s.key).toBe("germination");
+        }
       }),
       RUNS,
     );

@@ -41,7 +41,7 @@ describe("recomputePlan", () => {
     expect(starters[0]?.state).toBe("done");
   });
 
-  it("early sprouts in a tall fescue + bluegrass mix shorten light watering, but not below 14 days or the bluegrass estimate", () => {
+  it("early sprouts in a tall fescue + bluegrass mix shorten light watering, but not below 14 days, the bluegrass estimate or the first mowing", () => {
     const mixed = withChanges({
       visit: {
         seedMix: [
@@ -55,9 +55,12 @@ describe("recomputePlan", () => {
     const after = recomputePlan(before, valid(sprouts), "2026-09-17");
     const daysBefore = daysBetween("2026-09-10", before.meta.germinationWateringEnds ?? "");
     const daysAfter = daysBetween("2026-09-10", after.meta.germinationWateringEnds ?? "");
-    expect(daysBefore).toBe(30);
-    // Tall fescue showing on day 7 = the start of its 7–14 range, so bluegrass is expected near day 14 of its 14–30.
-    expect(daysAfter).toBe(14);
+    // Bluegrass up by day 30 at the latest, mowable a week later.
+    expect(daysBefore).toBe(37);
+    // Tall fescue showing on day 7 = the start of its 7–14 range, so bluegrass is expected near day 14 of its 14–30,
+    // mowable a week later: light watering through day 21.
+    expect(daysAfter).toBe(21);
+    expect(after.meta.germinationWateringEnds).toBe(after.meta.firstMowDate);
     expect(daysBetween("2026-09-10", after.meta.firstMowDate ?? "")).toBeGreaterThanOrEqual(14);
     expect(daysBetween("2026-09-10", after.meta.firstMowDate ?? "")).toBeLessThan(daysBetween("2026-09-10", before.meta.firstMowDate ?? ""));
   });
@@ -79,7 +82,7 @@ describe("recomputePlan", () => {
       }),
     );
     const plan = generatePlan(skipped);
-    expect(plan.meta.germinationWateringEnds).toBe(addDays("2026-09-24", 2));
+    expect(plan.meta.germinationWateringEnds).toBe(addDays("2026-10-01", 2));
     expect(plan.steps.find((s) => s.key === "water:2026-09-12:1")?.state).toBe("skipped");
   });
 

@@ -67,6 +67,17 @@ export function calculatorSummary(ctx: PlanContext): CalculatorSummary {
     nutrientsTotal: products.reduce((sum, p) => add(sum, p.nutrientsTotal), ZERO),
     precipitationRateInPerHour: ctx.precipitationRate,
     precipitationRateMeasured: ctx.precipitationRateMeasured,
+    precipitationRateDefault: ctx.precipitationRateMeasured
+      ? null
+      : ctx.sprinklerDefault
+        ? {
+            basis: "sprinkler_type",
+            minInPerHour: ctx.sprinklerDefault.rateInPerHour.min,
+            maxInPerHour: ctx.sprinklerDefault.rateInPerHour.max,
+            source: ctx.sprinklerDefault.rateInPerHour.source,
+            provenance: ctx.sprinklerDefault.rateInPerHour.provenance,
+          }
+        : { basis: "program" },
     germinationMinutesPerCycle: ctx.seeding ? minutesPerCycle(ctx.program.waterDepthPerCycleIn, ctx.precipitationRate) : null,
   };
 }

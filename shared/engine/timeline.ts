@@ -5,7 +5,7 @@ import type { Phase } from "./types.ts";
 
 /** Milestones as whole days after the visit (day 0 = visit day). */
 export interface Timeline {
-  /** Last day of several light waterings a day; null when nothing was sown. */
+  /** Last day of several light waterings a day (never before the first mowing); null when nothing was sown. */
   readonly germinationEnd: number | null;
   /** Our best estimate of the day the slowest species in the mix is up. */
   readonly slowestEmergence: number | null;
@@ -58,12 +58,14 @@ export function computeTimeline(
   const slowestEmergence = estimateSlowestEmergence(mix, observations.sproutsSeenDay);
   const afterSprouts =
     observations.sproutsSeenDay === null ? 0 : observations.sproutsSeenDay + program.wateringDaysAfterSprouts;
-  // The program's germination days (bounded at ≥ 14) is a floor no observation
-  // can shorten: early sprouts only stop watering from running past it.
-  const germinationEnd =
-    Math.max(program.germinationDays, slowestEmergence, afterSprouts) +
-    Math.min(MAX_MAKE_UP_DAYS, observations.skippedGerminationWateringDays);
   const firstMow = Math.max(program.firstMowMinDays, slowestEmergence + program.firstMowDaysAfterEmergence);
+  // The program's germination days (bounded at ≥ 14) is a floor no observation
+  // can shorten: early sprouts only stop watering from running past it. The
+  // surface stays moist until the grass is tall enough to mow, so light
+  // watering also runs through the first mowing day (TAPER_RULE).
+  const germinationEnd =
+    Math.max(program.germinationDays, slowestEmergence, afterSprouts, firstMow) +
+    Math.min(MAX_MAKE_UP_DAYS, observations.skippedGerminationWateringDays);
   const establishmentEnd = germinationEnd + program.establishmentDays;
   return {
     germinationEnd,

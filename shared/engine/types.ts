@@ -117,6 +117,8 @@ export interface CalculatorSummary {
   readonly nutrientsTotal: NutrientAmounts;
   readonly precipitationRateInPerHour: number;
   readonly precipitationRateMeasured: boolean;
+  /** Where an unmeasured rate comes from: the sprinkler type's typical range, or the program's default. */
+  readonly precipitationRateDefault: { readonly basis: "sprinkler_type"; readonly minInPerHour: number; readonly maxInPerHour: number; readonly source: string; readonly provenance: Provenance } | { readonly basis: "program" } | null;
   readonly germinationMinutesPerCycle: number | null;
 }
 

@@ -1,9 +1,9 @@
-import { nutrientsDelivered } from "../../calculators/fertiliser.ts";
+import { nutrientsDelivered, phosphateFromPhosphorus } from "../../calculators/fertiliser.ts";
 import type { PlanContext } from "../context.ts";
 import { formatNumber } from "../format.ts";
 import type { ProductApplied } from "../schemas/plan-input.ts";
 import { oneOffKey } from "../step-keys.ts";
-import { AUTUMN_FEEDING_N, SINGLE_FEEDING_N, STARTER_FEEDING } from "../tables/feeding.ts";
+import { AUTUMN_FEEDING_N, HIGH_N_QUICK_RELEASE_RULE, SINGLE_FEEDING_N, STARTER_FEEDING } from "../tables/feeding.ts";
 import { AUTUMN_MONTHS } from "../tables/timing.ts";
 import { monthOfDayNumber } from "../dates.ts";
 import type { PlanStep } from "../types.ts";
@@ -11,18 +11,27 @@ import type { HoldOffWindow } from "./hold-offs.ts";
 
 const FEED_CAUTIONS = ["label_is_law", "children_pets", "phosphorus_rules"] as const;
 
-/** A starter is phosphorus-rich: at least as much P as N on the bag. */
+/** A starter is phosphorus-rich (at least as much P as N on the bag) or organic (Nebraska Extension 2021: "starter or organic"). */
 export function isStarterProduct(product: ProductApplied): boolean {
-  return product.analysis.p > 0 && product.analysis.p >= product.analysis.n;
+  return product.organic === true || (product.analysis.p > 0 && product.analysis.p >= product.analysis.n);
+}
+
+/** Pounds of nitrogen per 1,000 ft² one product puts down: rate × N % (Nebraska Backyard Farmer, "Lawn Fertilizer Calculations"). */
+export function nitrogenLbPer1000(product: ProductApplied): number {
+  return (product.rateLbPer1000 * product.analysis.n) / 100;
 }
 
 /**
- * "High-N quick-release": flagged quick-release and nitrogen the largest of
- * the three grades. The references give no percentage threshold, so the
- * bag's own balance decides rather than an invented cut-off.
+ * "High-N quick-release" (HIGH_N_QUICK_RELEASE_RULE): nitrogen the largest of
+ * the three grades, and flagged quick-release or put down at a full feeding's
+ * worth or more. The references give no percentage threshold, so the bag's
+ * own balance and the published per-application amount decide rather than
+ * an invented cut-off.
  */
 export function isHighNQuickRelease(product: ProductApplied): boolean {
-  return product.quickReleaseN === true && product.analysis.n > product.analysis.p && product.analysis.n > product.analysis.k;
+  const nitrogenLed = product.analysis.n > product.analysis.p && product.analysis.n > product.analysis.k;
+  if (!nitrogenLed) return false;
+  return product.quickReleaseN === true || nitrogenLbPer1000(product) >= HIGH_N_QUICK_RELEASE_RULE.fullFeedingLbNPer1000 - 1e-9;
 }
 
 export function starterAppliedAtVisit(ctx: PlanContext): boolean {
@@ -47,12 +56,12 @@ export function feedingSteps(ctx: PlanContext, windows: readonly HoldOffWindow[]
       date,
       phase: ctx.phaseOf(1),
       kind: "feed",
-      title: "Spread a starter fertiliser on the seeded lawn",
-      detail: `Use a starter (phosphorus-rich) or organic lawn fertiliser, about ${STARTER_FEEDING.minPLbPer1000}–${STARTER_FEEDING.maxPLbPer1000} lb of phosphorus per 1,000 ft² or as the bag says. Not a weed-and-feed. Water lightly afterwards as usual.`,
+      title: "Spread a starter fertilizer on the seeded lawn",
+      detail: `Use a starter (phosphorus-rich) or organic lawn fertilizer. Aim for about ${formatNumber(phosphateFromPhosphorus(STARTER_FEEDING.minPLbPer1000))}–${formatNumber(phosphateFromPhosphorus(STARTER_FEEDING.maxPLbPer1000))} lb of phosphate (P₂O₅, the middle number on the bag) per 1,000 ft², which is ${STARTER_FEEDING.minPLbPer1000}–${STARTER_FEEDING.maxPLbPer1000} lb of phosphorus, or follow the bag. Not a weed-and-feed. Water lightly afterward as usual.`,
       feed: { product: "starter", highNQuickRelease: false },
       why: {
-        text: "Seedlings need phosphorus to build roots; starter fertiliser puts it where the seed is.",
-        source: STARTER_FEEDING.source,
+        text: "Seedlings need phosphorus to build roots; starter fertilizer puts it where the seed is.",
+        source: `${STARTER_FEEDING.source}; ${STARTER_FEEDING.conversionSource}`,
         provenance: STARTER_FEEDING.provenance,
       },
       cautions: FEED_CAUTIONS,

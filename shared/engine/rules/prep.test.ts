@@ -78,3 +78,28 @@ describe("prep steps in a plan", () => {
     expect(thatch?.date).toBe("2026-09-10");
   });
 });
+
+describe("aeration prep and after-care (common practice)", () => {
+  const aeration = withChanges({ visit: { services: ["aeration"], seedMix: [], seedRateLbPer1000: undefined, products: [] } });
+
+  it("asks to water the day before the visit if the soil is dry, about ½ inch, not on the morning itself", () => {
+    const plan = generatePlan(valid(aeration));
+    const step = plan.prepSteps.find((s) => s.key === "note:2026-09-09:water_before_aeration");
+    expect(step?.date).toBe("2026-09-09");
+    expect(step?.title).toBe("If the soil is dry, water the lawn the day before the visit");
+    expect(step?.detail).toMatch(/about 0\.5 inch of water/);
+    expect(step?.why.provenance).toBe("common practice");
+  });
+
+  it("tells the homeowner on the visit day to leave the cores on the lawn", () => {
+    const plan = generatePlan(valid(aeration));
+    const step = plan.steps.find((s) => s.key === "note:2026-09-10:leave_cores");
+    expect(step?.title).toBe("Leave the soil cores on the lawn");
+    expect(step?.detail).toMatch(/Do not rake them up/);
+  });
+
+  it("adds neither to a visit without core aeration", () => {
+    const plan = generatePlan(valid(withChanges({ visit: { services: ["overseeding", "starter_fertiliser"] } })));
+    expect([...plan.prepSteps, ...plan.steps].some((s) => /water_before_aeration|leave_cores/.test(s.key))).toBe(false);
+  });
+});

@@ -1,7 +1,8 @@
 import type { PlanContext } from "../context.ts";
-import { formatInches } from "../format.ts";
+import { formatInches, formatNumber } from "../format.ts";
 import { dailyKey } from "../step-keys.ts";
 import { MOW_DOWN_RULE, ONE_THIRD_RULE } from "../tables/mowing.ts";
+import { AERATION_PREP_RULE } from "../tables/watering.ts";
 import { SOURCES } from "../tables/sources.ts";
 import type { PlanStep } from "../types.ts";
 
@@ -50,6 +51,49 @@ const clearWhy = {
   provenance: "common practice",
 } as const;
 
+const moistSoilWhy = {
+  text: "Tines go deeper and pull cleaner cores from soil that is moist but not muddy; dry, hard soil lets them skid over the top.",
+  source: AERATION_PREP_RULE.source,
+  provenance: AERATION_PREP_RULE.provenance,
+} as const;
+
+function waterBeforeAerationStep(ctx: PlanContext): PlanStep {
+  const date = ctx.dateOf(-1);
+  const byHand = ctx.input.property.irrigation.kind === "none";
+  return {
+    key: dailyKey("note", date, "water_before_aeration"),
+    date,
+    phase: "prep",
+    kind: "note",
+    title: "If the soil is dry, water the lawn the day before the visit",
+    detail: `If it has not rained in the last few days, put down about ${formatNumber(AERATION_PREP_RULE.waterBeforeIn, 2)} inch of water${byHand ? " with a hose-end sprinkler" : ""}. Do not water on the morning of the visit: muddy soil clogs the tines.`,
+    why: moistSoilWhy,
+    cautions: ["watering_restrictions"],
+  };
+}
+
+/** After core aeration the soil plugs stay where they fall: they break down and feed the surface. */
+export function aerationCoreSteps(ctx: PlanContext): PlanStep[] {
+  if (!ctx.services.has("aeration")) return [];
+  const date = ctx.dateOf(0);
+  return [
+    {
+      key: dailyKey("note", date, "leave_cores"),
+      date,
+      phase: ctx.phaseOf(0),
+      kind: "note",
+      title: "Leave the soil cores on the lawn",
+      detail: "The little plugs the aerator pulled crumble back into the lawn within a week or two of rain, watering and mowing. Do not rake them up.",
+      why: {
+        text: "Cores left on top return soil and its microbes to the surface, which helps break down thatch and settles seed in.",
+        source: AERATION_PREP_RULE.source,
+        provenance: AERATION_PREP_RULE.provenance,
+      },
+      cautions: [],
+    },
+  ];
+}
+
 export function prepSteps(ctx: PlanContext): PlanStep[] {
   const { services, input, program } = ctx;
   const { property } = input;
@@ -94,6 +138,8 @@ export function prepSteps(ctx: PlanContext): PlanStep[] {
       cautions: [],
     });
   }
+
+  if (services.has("aeration")) steps.push(waterBeforeAerationStep(ctx));
 
   if (services.has("aeration") || services.has("slit_seeding") || services.has("dethatching")) {
     const sprinklers = property.irrigation.kind === "in_ground" ? "sprinkler heads, valve boxes, " : "";

@@ -1,8 +1,8 @@
 import type { PlanContext } from "../context.ts";
-import { civilFromDays, daysFromCivil } from "../dates.ts";
+import { civilFromDays } from "../dates.ts";
 import { dailyKey } from "../step-keys.ts";
 import { SOURCES } from "../tables/sources.ts";
-import { AUTUMN_MONTHS, LEAF_SEASON_END } from "../tables/timing.ts";
+import { AUTUMN_MONTHS, LEAF_SEASON } from "../tables/timing.ts";
 import type { PlanStep } from "../types.ts";
 
 export function isAutumnVisit(ctx: PlanContext): boolean {
@@ -10,17 +10,22 @@ export function isAutumnVisit(ctx: PlanContext): boolean {
   return (AUTUMN_MONTHS[ctx.hemisphere] as readonly number[]).includes(month);
 }
 
+/** Month and day as one comparable number (Sept. 1 → 901). */
+const monthDay = (d: { month: number; day: number }) => d.month * 100 + d.day;
+
 /**
- * Weekly leaf clean-up for autumn visits, until the leaf season ends. Fallen
- * leaves shade out seedlings and hold damp against them.
+ * Weekly leaf clean-up on the plan's dates that fall in the leaf season, so a
+ * late-summer visit whose plan runs into autumn gets it too. Fallen leaves
+ * shade out seedlings and hold damp against them.
  */
 export function leafCleanupSteps(ctx: PlanContext): PlanStep[] {
-  if (!isAutumnVisit(ctx)) return [];
-  const visitYear = civilFromDays(ctx.visitDay).year;
-  const end = LEAF_SEASON_END[ctx.hemisphere];
-  const lastDay = Math.min(ctx.timeline.planEnd, daysFromCivil(visitYear, end.month, end.day) - ctx.visitDay);
+  const season = LEAF_SEASON[ctx.hemisphere];
+  const from = monthDay(season.start);
+  const to = monthDay(season.end);
   const steps: PlanStep[] = [];
-  for (let day = 7; day <= lastDay; day += 7) {
+  for (let day = 7; day <= ctx.timeline.planEnd; day += 7) {
+    const when = monthDay(civilFromDays(ctx.visitDay + day));
+    if (when < from || when > to) continue;
     const date = ctx.dateOf(day);
     const beforeFirstMow = ctx.timeline.firstMow !== null && day < ctx.timeline.firstMow;
     steps.push({
@@ -34,8 +39,8 @@ export function leafCleanupSteps(ctx: PlanContext): PlanStep[] {
         : "Rake, blow or mulch them with the mower so the grass gets light.",
       why: {
         text: "A blanket of leaves blocks light and keeps the grass wet, which thins new and old grass alike.",
-        source: LEAF_SEASON_END.source,
-        provenance: LEAF_SEASON_END.provenance,
+        source: LEAF_SEASON.source,
+        provenance: LEAF_SEASON.provenance,
       },
       cautions: beforeFirstMow ? [] : ["equipment_safety"],
     });

@@ -8,6 +8,7 @@ import { FROST_RULE } from "../tables/timing.ts";
 import type { PlanWarning } from "../types.ts";
 import { isHighNQuickRelease } from "./feeding.ts";
 import { isAutumnVisit } from "./seasonal.ts";
+import { assumedRatePhrase } from "./watering-notes.ts";
 
 /** How far outside the species range (as a fraction of the range's edge) turns a caution into a risk. */
 const FAR_OUTSIDE_RANGE = 0.5;
@@ -156,9 +157,9 @@ export function planWarnings(ctx: PlanContext): PlanWarning[] {
     add({
       code: "precipitation_rate_estimated",
       severity: "info",
-      message: `Watering minutes assume the sprinkler puts down ${ctx.precipitationRate} inch an hour until a catch-can test measures it.`,
+      message: `Watering minutes assume ${assumedRatePhrase(ctx)} until a catch-can test measures it.`,
       reason: "Minutes per cycle = depth wanted ÷ precipitation rate × 60.",
-      source: SOURCES.irrigationAssociation,
+      source: ctx.sprinklerDefault ? `${SOURCES.irrigationAssociation}; rate: ${ctx.sprinklerDefault.rateInPerHour.source}` : SOURCES.irrigationAssociation,
       provenance: "from memory",
     });
   }

@@ -1,4 +1,5 @@
 import type { PlanContext } from "../context.ts";
+import { formatNumber } from "../format.ts";
 import { oneOffKey } from "../step-keys.ts";
 import type { Why } from "../tables/provenance.ts";
 import { SOURCES } from "../tables/sources.ts";
@@ -16,13 +17,23 @@ const frostWhy: Why = {
   provenance: "common practice",
 };
 
+/** "0.6 inch an hour, typical of rotor heads (0.4–0.8)": the assumed rate, said to be a default. */
+export function assumedRatePhrase(ctx: PlanContext): string {
+  const typical = ctx.sprinklerDefault;
+  const rate = `${formatNumber(ctx.precipitationRate, 2)} inch an hour`;
+  return typical
+    ? `${rate}, a typical figure for ${typical.name} (${formatNumber(typical.rateInPerHour.min, 2)}–${formatNumber(typical.rateInPerHour.max, 2)})`
+    : `${rate}, our default for sprinkler systems`;
+}
+
 /** One-off watering notes: when to stop for frost, and how to measure the sprinkler. */
 export function wateringNotes(ctx: PlanContext): PlanStep[] {
   const { timeline } = ctx;
   const notes: PlanStep[] = [];
-  // Only announced in the maturing phase: earlier, seedlings still need their
-  // water and the frost warning already covers the risk.
-  if (ctx.frostDay !== null && ctx.frostDay > timeline.establishmentEnd && ctx.frostDay <= timeline.planEnd) {
+  // Announced once light watering is over, since every later watering stops
+  // at the frost; during germination the seed still needs its water and the
+  // frost warning already covers the risk.
+  if (ctx.frostDay !== null && ctx.frostDay > (timeline.germinationEnd ?? 0) && ctx.frostDay <= timeline.planEnd) {
     notes.push({
       key: oneOffKey("note", "frost_stop_watering"),
       date: ctx.dateOf(ctx.frostDay),
@@ -45,7 +56,7 @@ export function wateringNotes(ctx: PlanContext): PlanStep[] {
       phase: ctx.phaseOf(1),
       kind: "note",
       title: "Measure how much water your sprinkler puts down",
-      detail: `Set ${CATCH_CAN_TEST.cans} straight-sided cups or cans across one watered area, run it for ${CATCH_CAN_TEST.minutes} minutes, and note the millilitres in each. Send us the numbers and we will set exact minutes. Until then the plan assumes ${ctx.precipitationRate} inch an hour.`,
+      detail: `Set ${CATCH_CAN_TEST.cans} straight-sided cups or cans across one watered area, run it for ${CATCH_CAN_TEST.minutes} minutes, and note the millilitres in each. Send us the numbers and we will set exact minutes. Until then the plan assumes ${assumedRatePhrase(ctx)}.`,
       why: catchCanWhy,
       cautions: [],
     });

@@ -1,6 +1,6 @@
 import { minutesPerCycle } from "../../calculators/irrigation.ts";
 import type { PlanContext } from "../context.ts";
-import { plural } from "../format.ts";
+import { formatNumber, plural } from "../format.ts";
 import { dailyKey } from "../step-keys.ts";
 import { SOURCES } from "../tables/sources.ts";
 import {
@@ -8,6 +8,8 @@ import {
   ESTABLISHMENT_WATERING_RULE,
   GERMINATION_TIMES_BY_CYCLES,
   GERMINATION_WATERING_RULE,
+  TAPER_RULE,
+  WEEKLY_WATER_NEED,
 } from "../tables/watering.ts";
 import type { Why } from "../tables/provenance.ts";
 import type { PlanStep } from "../types.ts";
@@ -25,6 +27,11 @@ const deepWhy: Why = {
   text: "Once the grass is up, fewer but longer waterings send roots deeper, which makes the lawn tougher in heat and drought.",
   source: ESTABLISHMENT_WATERING_RULE.source,
   provenance: ESTABLISHMENT_WATERING_RULE.provenance,
+};
+const taperWhy: Why = {
+  text: "The new grass is tall enough to mow, so its roots can reach a little deeper. Watering less often but longer each time trains them down before deep, weekly watering.",
+  source: TAPER_RULE.source,
+  provenance: TAPER_RULE.provenance,
 };
 const rainWhy: Why = {
   text: "Heavy rain wet the soil deeply enough for today; extra water now would only puddle.",
@@ -104,9 +111,36 @@ function germinationStep(ctx: PlanContext, day: number, minutes: number, starts:
   };
 }
 
-function deepStep(ctx: PlanContext, day: number, minutes: number, deepStart: readonly StartTime[], title?: string): PlanStep {
+/** One watering's depth: the week's "about 1 inch" shared by the week's waterings, never more than the program's deepest. */
+export function depthPerWatering(ctx: PlanContext, perWeek: number): number {
+  return Math.min(ctx.program.deepWateringDepthIn, WEEKLY_WATER_NEED.inches / perWeek);
+}
+
+/** One kind of watering, its texts composed once per plan rather than once per step. */
+interface DeepWatering {
+  readonly depthIn: number;
+  readonly minutes: number;
+  readonly depthText: string;
+  /** How to water it: by hose, or how long each zone runs. */
+  readonly howText: string;
+}
+
+function deepWatering(ctx: PlanContext, perWeek: number): DeepWatering {
+  const depthIn = depthPerWatering(ctx, perWeek);
+  const minutes = wholeMinutes(depthIn, ctx.precipitationRate);
+  const byHand = ctx.input.property.irrigation.kind === "none";
+  return {
+    depthIn,
+    minutes,
+    depthText: formatNumber(depthIn, 2),
+    howText: byHand ? " A hose-end sprinkler moved around the lawn does this more evenly than hand watering." : zonesSentence(ctx, minutes),
+  };
+}
+
+function deepStep(ctx: PlanContext, day: number, deep: DeepWatering, deepStart: readonly StartTime[], title?: string): PlanStep {
   const date = ctx.dateOf(day);
   const byHand = ctx.input.property.irrigation.kind === "none";
+  const minutes = deep.minutes;
   return {
     key: dailyKey("water", date, 1),
     date,
@@ -114,11 +148,39 @@ function deepStep(ctx: PlanContext, day: number, minutes: number, deepStart: rea
     kind: "water",
     title: title ?? (byHand ? "Water deeply today" : `Water deeply today, ${minutes} minutes ${wherePhrase(ctx)}`),
     detail:
-      `Put down about ${ctx.program.deepWateringDepthIn} inch of water, early in the morning. Skip it if it rained that much since the last watering.` +
-      (byHand ? " A hose-end sprinkler moved around the lawn does this more evenly than hand watering." : zonesSentence(ctx, minutes)),
+      `Put down about ${deep.depthText} inch of water, early in the morning: about ${WEEKLY_WATER_NEED.inches} inch a week in all, rain included. Skip it if it rained that much since the last watering.${deep.howText}`,
     times: realTimes(ctx, day, deepStart),
     minutesPerCycle: minutes,
     why: deepWhy,
+    cautions: WATER_CAUTIONS,
+  };
+}
+
+type TaperStage = "once_a_day" | "every_other_day";
+
+function taperStep(ctx: PlanContext, day: number, stage: TaperStage, first: boolean, deep: DeepWatering, deepStart: readonly StartTime[]): PlanStep {
+  const date = ctx.dateOf(day);
+  const byHand = ctx.input.property.irrigation.kind === "none";
+  const amount = byHand ? "" : `: ${deep.minutes} minutes ${wherePhrase(ctx)}`;
+  const title =
+    stage === "once_a_day"
+      ? first
+        ? `From today, water once a day${amount}`
+        : `Water once today${amount}`
+      : first
+        ? `From today, water every other day${amount}`
+        : `Water today (every other day)${amount}`;
+  return {
+    key: dailyKey("water", date, 1),
+    date,
+    phase: ctx.phaseOf(day),
+    kind: "water",
+    title,
+    detail:
+      `Put down about ${deep.depthText} inch, early in the morning, so the soil stays damp below the surface between waterings. Skip it if it rained that much since the last watering.${deep.howText}`,
+    times: realTimes(ctx, day, deepStart),
+    minutesPerCycle: deep.minutes,
+    why: taperWhy,
     cautions: WATER_CAUTIONS,
   };
 }
@@ -136,11 +198,16 @@ function deepWateringDays(from: number, to: number, perWeek: number): number[] {
 export function wateringSteps(ctx: PlanContext): PlanStep[] {
   const { program, timeline } = ctx;
   const steps: PlanStep[] = [];
+  // No watering after the expected first frost except germination's light
+  // cycles: those are not cut, because the frost warning already flags that
+  // timing as a risk and seed left dry dies at once.
+  const stopDay = ctx.frostDay !== null ? Math.min(ctx.frostDay - 1, timeline.planEnd) : timeline.planEnd;
   const push = (day: number, make: () => PlanStep) => {
     steps.push(ctx.rainDays.has(ctx.visitDay + day) ? rainNote(ctx, day) : make());
   };
-  const deepMinutes = wholeMinutes(program.deepWateringDepthIn, ctx.precipitationRate);
   const deepStart = parseStarts([program.deepWateringTime]);
+  const maturing = deepWatering(ctx, program.maturingWateringsPerWeek);
+  let maturingFrom = timeline.establishmentEnd + 1;
 
   if (timeline.germinationEnd !== null) {
     const lightMinutes = wholeMinutes(program.waterDepthPerCycleIn, ctx.precipitationRate);
@@ -166,28 +233,43 @@ export function wateringSteps(ctx: PlanContext): PlanStep[] {
       };
     });
     for (let day = 1; day <= timeline.germinationEnd; day++) push(day, () => germinationStep(ctx, day, lightMinutes, starts));
-    for (const day of deepWateringDays(timeline.germinationEnd + 1, timeline.establishmentEnd, program.establishmentWateringsPerWeek)) {
+
+    // Taper after the first mowing: once a day, then every other day, then deep.
+    const establishmentLast = Math.min(timeline.establishmentEnd, stopDay);
+    const onceFrom = timeline.germinationEnd + 1;
+    const everyOtherFrom = onceFrom + TAPER_RULE.onceADayDays;
+    const deepFrom = everyOtherFrom + TAPER_RULE.everyOtherDayDays;
+    const daily = deepWatering(ctx, 7);
+    const everyOther = deepWatering(ctx, 3.5);
+    for (let day = onceFrom; day < everyOtherFrom && day <= establishmentLast; day++) {
+      push(day, () => taperStep(ctx, day, "once_a_day", day === onceFrom, daily, deepStart));
+    }
+    for (let day = everyOtherFrom; day < deepFrom && day <= establishmentLast; day += 2) {
+      push(day, () => taperStep(ctx, day, "every_other_day", day === everyOtherFrom, everyOther, deepStart));
+    }
+    const establishment = deepWatering(ctx, program.establishmentWateringsPerWeek);
+    for (const day of deepWateringDays(deepFrom, establishmentLast, program.establishmentWateringsPerWeek)) {
       push(day, () =>
-        deepStep(ctx, day, deepMinutes, deepStart, day === timeline.germinationEnd! + 1 && ctx.input.property.irrigation.kind !== "none"
-          ? `Switch to deep watering: ${deepMinutes} minutes ${wherePhrase(ctx)} today`
+        deepStep(ctx, day, establishment, deepStart, day === deepFrom && ctx.input.property.irrigation.kind !== "none"
+          ? `Switch to deep watering: ${establishment.minutes} minutes ${wherePhrase(ctx)} today`
           : undefined),
       );
     }
+    // Establishment may be shorter than the taper; deep watering picks up after it.
+    maturingFrom = Math.max(maturingFrom, deepFrom);
   } else {
     const feeding = ctx.services.has("fertiliser_only") || ctx.services.has("starter_fertiliser");
-    const amount = ctx.input.property.irrigation.kind === "none" ? "" : `, ${deepMinutes} minutes ${wherePhrase(ctx)}`;
+    const amount = ctx.input.property.irrigation.kind === "none" ? "" : `, ${maturing.minutes} minutes ${wherePhrase(ctx)}`;
     push(0, () =>
-      deepStep(ctx, 0, deepMinutes, deepStart, `${feeding ? "Water the fertiliser in today" : "Water the lawn deeply today"}${amount}`),
+      deepStep(ctx, 0, maturing, deepStart, `${feeding ? "Water the fertiliser in today" : "Water the lawn deeply today"}${amount}`),
     );
-    for (const day of deepWateringDays(3, timeline.establishmentEnd, program.maturingWateringsPerWeek)) push(day, () => deepStep(ctx, day, deepMinutes, deepStart));
+    for (const day of deepWateringDays(3, Math.min(timeline.establishmentEnd, stopDay), program.maturingWateringsPerWeek)) {
+      push(day, () => deepStep(ctx, day, maturing, deepStart));
+    }
   }
 
-  // Watering stops at the expected first frost: the grass stops using water
-  // and lines can freeze. Germination and establishment water is not cut,
-  // because the frost warning already flags that timing as a risk.
-  const stopDay = ctx.frostDay !== null ? Math.min(ctx.frostDay - 1, timeline.planEnd) : timeline.planEnd;
-  for (const day of deepWateringDays(timeline.establishmentEnd + 1, stopDay, program.maturingWateringsPerWeek)) {
-    push(day, () => deepStep(ctx, day, deepMinutes, deepStart));
+  for (const day of deepWateringDays(maturingFrom, stopDay, program.maturingWateringsPerWeek)) {
+    push(day, () => deepStep(ctx, day, maturing, deepStart));
   }
   steps.push(...wateringNotes(ctx));
   return steps;

@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { isValidIsoDate, toDayNumber } from "../dates.ts";
+import { SPRINKLER_TYPES } from "../tables/sprinklers.ts";
 import { isoDateSchema, localTimeSchema, speciesSchema, timeZoneSchema } from "./common.ts";
 import { programSettingsSchema } from "./program-settings.ts";
 
@@ -38,6 +39,8 @@ export const productAppliedSchema = z.object({
   analysis: analysisSchema,
   rateLbPer1000: z.number().gt(0, "Must be more than 0").max(100, "Must be at most 100 lb per 1,000 ft²"),
   quickReleaseN: z.boolean().optional(),
+  /** Organic (natural) fertilizers suit new seed as a starter does. */
+  organic: z.boolean().optional(),
 });
 
 export const visitSchema = z
@@ -82,6 +85,8 @@ const round1 = (x: number) => Math.round(x * 10) / 10;
 
 export const irrigationSchema = z.object({
   kind: z.enum(["in_ground", "hose_end", "none"]),
+  /** Optional: without it an in-ground system uses the program's default rate, a hose-end sprinkler the hose-end range. */
+  sprinklerType: z.enum(SPRINKLER_TYPES).optional(),
   zones: z.number().int().min(1).max(99).optional(),
   precipitationRateInPerHour: z.number().min(0.05, "Must be at least 0.05 in/h").max(5, "Must be at most 5 in/h").optional(),
 });

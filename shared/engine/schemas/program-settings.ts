@@ -39,7 +39,7 @@ export const programSettingBounds = {
   wateringDaysAfterSprouts: bound(7, 5, 14, "days", "Sprouts have shallow roots; light watering continues for a while after they show.", SOURCES.tradePractice, "common practice"),
   establishmentDays: bound(28, 21, 56, "days", "Fewer, deeper waterings (2–3 a week) while the new grass roots down.", SOURCES.nebraskaColumn2021, "published"),
   establishmentWateringsPerWeek: bound(3, 2, 3, "count", "Fewer, deeper waterings: 2–3 a week once the grass is up.", SOURCES.nebraskaColumn2021, "published"),
-  deepWateringDepthIn: bound(0.5, 0.25, 1, "in", "Deeper watering pulls roots down; about 1 in a week in total.", SOURCES.tradePractice, "common practice"),
+  deepWateringDepthIn: bound(0.5, 0.25, 1, "in", "Deeper watering pulls roots down. The most one watering puts down: the week's waterings share about 1 in in total.", SOURCES.tradePractice, "common practice"),
   maturingDays: bound(28, 14, 56, "days", "Ordinary care while the new lawn thickens.", SOURCES.tradePractice, "common practice"),
   maturingWateringsPerWeek: bound(2, 1, 3, "count", "Deep, infrequent watering for an established lawn.", SOURCES.tradePractice, "common practice"),
   firstMowMinDays: bound(14, 14, 42, "days", "First mowing not before about 2 weeks after seeding.", SOURCES.tradePractice, "common practice"),

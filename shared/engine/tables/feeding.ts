@@ -8,11 +8,16 @@ export const SINGLE_FEEDING_N = {
   provenance: "published",
 } as const;
 
-/** New seedings: a phosphorus-rich starter supplying about 1–1.5 lb P per 1,000 ft². */
+/**
+ * New seedings: a phosphorus-rich starter supplying about 1–1.5 lb P per
+ * 1,000 ft², or an organic fertilizer. Bags show phosphate (P₂O₅), so the
+ * homeowner is told the phosphate too (P = P₂O₅ × 0.4364, published).
+ */
 export const STARTER_FEEDING = {
   minPLbPer1000: 1,
   maxPLbPer1000: 1.5,
   source: SOURCES.nebraskaColumn2021,
+  conversionSource: SOURCES.phosphateConversion,
   provenance: "published",
 } as const;
 
@@ -24,8 +29,16 @@ export const AUTUMN_FEEDING_N = {
   provenance: "common practice",
 } as const;
 
-/** High-nitrogen quick-release feeds burn and push soft growth on new seed. */
+/**
+ * High-nitrogen quick-release feeds burn and push soft growth on new seed.
+ * Recognised from the bag and the rate, no tick needed: nitrogen the largest
+ * of the three grades, and either marked quick-release or put down at a full
+ * feeding's worth (¾ lb N per 1,000 ft², the low end of a typical single
+ * application) or more in one go. A form's unticked box cannot tell "slow-
+ * release" from "not asked", so it never clears a product.
+ */
 export const HIGH_N_QUICK_RELEASE_RULE = {
+  fullFeedingLbNPer1000: SINGLE_FEEDING_N.minLbPer1000,
   source: SOURCES.tradePractice,
   provenance: "common practice",
 } as const;

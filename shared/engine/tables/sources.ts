@@ -14,5 +14,7 @@ export const SOURCES = {
   nist811: "NIST SP 811",
   tradePractice: "Lawn-care trade practice (no single source)",
   productLabel: "The product label",
+  ifasTexasAmIrrigation: "University of Florida IFAS and Texas A&M AgriLife irrigation guides",
+  phosphateConversion: "Standard fertilizer-labelling conversion (atomic masses): P = P₂O₅ × 0.4364",
   sproutlineChoice: "Sproutline default, chosen within the trade's range",
 } as const;

@@ -18,10 +18,14 @@ export const AUTUMN_MONTHS = {
   south: [3, 4, 5],
 } as const;
 
-/** Leaves keep falling after autumn's last month; clean-up steps stop at this month/day. */
-export const LEAF_SEASON_END = {
-  north: { month: 12, day: 15 },
-  south: { month: 6, day: 15 },
+/**
+ * Leaf season: from the first day of autumn until leaves stop falling a little
+ * after autumn's last month. Clean-up steps fall on plan dates inside it,
+ * whatever month the visit was in.
+ */
+export const LEAF_SEASON = {
+  north: { start: { month: 9, day: 1 }, end: { month: 12, day: 15 } },
+  south: { start: { month: 3, day: 1 }, end: { month: 6, day: 15 } },
   source: SOURCES.tradePractice,
   provenance: "common practice",
 } as const;

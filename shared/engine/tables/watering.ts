@@ -38,3 +38,34 @@ export const CATCH_CAN_TEST = {
   source: `${SOURCES.irrigationAssociation}; ${SOURCES.chicoDuNotes}`,
   provenance: "from memory",
 } as const;
+
+/**
+ * Keep the seeded surface moist until the new grass is tall enough to mow
+ * (the first mowing), then taper: once a day, then every other day, then deep
+ * and infrequent. The moist-until-mowable part is published; how long each
+ * taper step lasts is a rule of thumb, a week each here.
+ */
+export const TAPER_RULE = {
+  onceADayDays: 7,
+  everyOtherDayDays: 7,
+  source: `${SOURCES.nebraskaColumn2021} (moist until tall enough to mow); taper steps: ${SOURCES.tradePractice}`,
+  provenance: "common practice",
+} as const;
+
+/**
+ * About 1 inch of water a week, rain included, for a lawn past germination.
+ * Each watering's depth is this week's total shared by the week's waterings,
+ * so the plan never asks for more than the "about 1 inch" it states.
+ */
+export const WEEKLY_WATER_NEED = {
+  inches: 1,
+  source: SOURCES.tradePractice,
+  provenance: "common practice",
+} as const;
+
+/** Aerate moist soil (water the day before if dry) and leave the cores to break down. */
+export const AERATION_PREP_RULE = {
+  waterBeforeIn: 0.5,
+  source: SOURCES.tradePractice,
+  provenance: "common practice",
+} as const;

@@ -2,6 +2,7 @@ import fc from "fast-check";
 import { daysFromCivil, fromDayNumber, toDayNumber } from "../dates.ts";
 import { SEEDING_SERVICES, type PlanInputRaw, type Service } from "../schemas/plan-input.ts";
 import { SPECIES, type Species } from "../tables/species.ts";
+import { SPRINKLER_TYPES } from "../tables/sprinklers.ts";
 
 /*
  * Arbitraries that build only VALID plan inputs, so property tests exercise
@@ -106,6 +107,7 @@ export const planInputArb: fc.Arbitrary<PlanInputRaw> = fc
     lawnCondition: fc.constantFrom("thin", "bare", "thick_dormant", "thick") as fc.Arbitrary<"thin" | "bare" | "thick_dormant" | "thick">,
     irrigationKind: fc.constantFrom("in_ground", "hose_end", "none") as fc.Arbitrary<"in_ground" | "hose_end" | "none">,
     zones: fc.option(fc.integer({ min: 1, max: 12 }), { nil: undefined }),
+    sprinklerType: fc.option(fc.constantFrom(...SPRINKLER_TYPES), { nil: undefined }),
     pr: fc.option(fc.double({ min: 0.2, max: 2.5, noNaN: true }), { nil: undefined }),
     current: fc.constantFrom(2, 2.5, 3, 3.5, 4, 4.5),
     highestExtra: fc.constantFrom(0, 0.5, 1),
@@ -145,6 +147,7 @@ export const planInputArb: fc.Arbitrary<PlanInputRaw> = fc
         irrigation: {
           kind: base.irrigationKind,
           ...(base.zones === undefined ? {} : { zones: base.zones }),
+          ...(base.sprinklerType === undefined ? {} : { sprinklerType: base.sprinklerType }),
           ...(base.pr === undefined ? {} : { precipitationRateInPerHour: Math.round(base.pr * 100) / 100 }),
         },
         currentMowingHeightIn: base.current,

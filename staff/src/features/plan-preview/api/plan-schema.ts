@@ -103,6 +103,12 @@ export const planSchema: z.ZodType<Plan> = z.object({
     nutrientsTotal: nutrients,
     precipitationRateInPerHour: z.number(),
     precipitationRateMeasured: z.boolean(),
+    precipitationRateDefault: z
+      .discriminatedUnion("basis", [
+        z.object({ basis: z.literal("sprinkler_type"), minInPerHour: z.number(), maxInPerHour: z.number(), source: z.string(), provenance }),
+        z.object({ basis: z.literal("program") }),
+      ])
+      .nullable(),
     germinationMinutesPerCycle: z.number().nullable(),
   }),
   cautions: z.array(z.object({ id: cautionId, text: z.string() })),

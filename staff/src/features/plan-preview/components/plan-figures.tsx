@@ -100,7 +100,7 @@ export function PlanFigures({ summary }: { summary: CalculatorSummary }) {
               label: "Precipitation rate used",
               value: `${formatFigure(summary.precipitationRateInPerHour, 2)} in/h (${formatFigure(inToMm(summary.precipitationRateInPerHour), 1)} mm/h)`,
             },
-            { label: "Where it comes from", value: summary.precipitationRateMeasured ? "Measured at this property" : "Program default (not measured)" },
+            { label: "Where it comes from", value: rateOrigin(summary) },
             {
               label: "Minutes per watering cycle",
               value: summary.germinationMinutesPerCycle === null ? "No germination watering" : `${formatFigure(summary.germinationMinutesPerCycle, 0)} min`,
@@ -119,4 +119,12 @@ function FigureGroup({ title, children }: { title: string; children: ReactNode }
       {children}
     </div>
   );
+}
+
+/** A default is said to be one, with the sprinkler type's typical range when that is what it rests on. */
+function rateOrigin(summary: CalculatorSummary): string {
+  const typical = summary.precipitationRateDefault;
+  if (summary.precipitationRateMeasured || typical === null) return "Measured at this property";
+  if (typical.basis === "program") return "Program default (not measured)";
+  return `Default for this sprinkler type, typically ${formatFigure(typical.minInPerHour, 2)}–${formatFigure(typical.maxInPerHour, 2)} in/h (${typical.provenance}; not measured)`;
 }

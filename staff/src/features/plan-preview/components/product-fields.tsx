@@ -56,6 +56,7 @@ export function ProductFields() {
               {...register(`visit.products.${i}.rateLbPer1000`)}
             />
             <Checkbox label="Most of its nitrogen is quick-release" {...register(`visit.products.${i}.quickReleaseN`)} />
+            <Checkbox label="Organic (natural) fertilizer" {...register(`visit.products.${i}.organic`)} />
             <Button variant="quiet" className="self-start" onClick={() => remove(i)}>
               Remove product {i + 1}
             </Button>

@@ -1,10 +1,10 @@
 import { use } from "react";
 import { useFormContext, useWatch } from "react-hook-form";
-import { SPECIES } from "#shared/engine/index";
+import { SPECIES, SPRINKLER_TYPES } from "#shared/engine/index";
 import { FieldError, SelectField, TextField } from "#shared/ui/index";
 import type { IrrigationKind, LawnCondition, PreviewFormValues } from "../lib/form-values.ts";
 import { FieldErrorsContext, fieldId } from "../lib/field-errors.ts";
-import { IRRIGATION_LABELS, LAWN_CONDITION_LABELS, speciesLabel } from "../lib/labels.ts";
+import { IRRIGATION_LABELS, LAWN_CONDITION_LABELS, SPRINKLER_TYPE_LABELS, speciesLabel } from "../lib/labels.ts";
 import { daysAfter } from "../lib/local-dates.ts";
 import { Checkbox } from "./checkbox.tsx";
 import { CheckboxGroup } from "./checkbox-group.tsx";
@@ -17,6 +17,7 @@ const seasonOptions = [
 ];
 const conditionOptions = (Object.keys(LAWN_CONDITION_LABELS) as LawnCondition[]).map((value) => ({ value, label: LAWN_CONDITION_LABELS[value] }));
 const irrigationOptions = (Object.keys(IRRIGATION_LABELS) as IrrigationKind[]).map((value) => ({ value, label: IRRIGATION_LABELS[value] }));
+const sprinklerTypeOptions = SPRINKLER_TYPES.map((value) => ({ value, label: SPRINKLER_TYPE_LABELS[value] }));
 
 /** The lawn, its watering and its mower, and where it is. */
 export function PropertyFields() {
@@ -54,6 +55,15 @@ export function PropertyFields() {
       <SelectField id={fieldId("property.irrigation.kind")} label="Watering" error={errors["property.irrigation.kind"]} options={irrigationOptions} {...register("property.irrigation.kind")} />
       {irrigationKind !== "none" && (
         <>
+          <SelectField
+            id={fieldId("property.irrigation.sprinklerType")}
+            label="Sprinkler type"
+            hint="Sets the default watering rate until a catch-cup test measures it."
+            error={errors["property.irrigation.sprinklerType"]}
+            placeholderOption="Not known"
+            options={sprinklerTypeOptions}
+            {...register("property.irrigation.sprinklerType")}
+          />
           <TextField
             id={fieldId("property.irrigation.zones")}
             label="Zones (optional)"
@@ -65,7 +75,7 @@ export function PropertyFields() {
           <TextField
             id={fieldId("property.irrigation.precipitationRateInPerHour")}
             label="Precipitation rate (in/h)"
-            hint="From a catch-cup test. Leave empty if unknown: the program's default is used."
+            hint="From a catch-cup test. Leave empty if unknown: the sprinkler type's typical rate, or else the program's default, is used."
             inputMode="decimal"
             autoComplete="off"
             error={errors["property.irrigation.precipitationRateInPerHour"]}

@@ -24,13 +24,13 @@ export function defaultPreviewValues(visitDate = nextAutumnVisitDate()): Preview
       seedRateLbPer1000: "5",
       areaFt2: "6000",
       products: [
-        { name: "Starter 18-24-12", analysis: { n: "18", p: "24", k: "12" }, rateLbPer1000: "4", quickReleaseN: false },
+        { name: "Starter 18-24-12", analysis: { n: "18", p: "24", k: "12" }, rateLbPer1000: "4", quickReleaseN: false, organic: false },
       ],
     },
     property: {
       grassType: { species: ["tall_fescue"], season: "" },
       lawnCondition: "thin",
-      irrigation: { kind: "in_ground", zones: "4", precipitationRateInPerHour: "" },
+      irrigation: { kind: "in_ground", sprinklerType: "", zones: "4", precipitationRateInPerHour: "" },
       currentMowingHeightIn: "4",
       mowerHighestSettingIn: "4",
       mowerSettingStepIn: "0.5",

@@ -1,4 +1,4 @@
-import type { Service, Species } from "#shared/engine/index";
+import type { Service, Species, SprinklerType } from "#shared/engine/index";
 
 /*
  * What the form holds. Numbers stay as the text the person typed, so a half-typed
@@ -18,6 +18,7 @@ export interface ProductRowValues {
   analysis: { n: string; p: string; k: string };
   rateLbPer1000: string;
   quickReleaseN: boolean;
+  organic: boolean;
 }
 
 export type LawnCondition = "thin" | "bare" | "thick_dormant" | "thick";
@@ -38,7 +39,8 @@ export interface PreviewFormValues {
   property: {
     grassType: { species: Species[]; season: "" | "cool" | "warm" };
     lawnCondition: LawnCondition;
-    irrigation: { kind: IrrigationKind; zones: string; precipitationRateInPerHour: string };
+    /** Empty when the crew does not know the sprinkler type. */
+    irrigation: { kind: IrrigationKind; sprinklerType: "" | SprinklerType; zones: string; precipitationRateInPerHour: string };
     currentMowingHeightIn: string;
     mowerHighestSettingIn: string;
     mowerSettingStepIn: string;
@@ -58,4 +60,5 @@ export const emptyProductRow = (): ProductRowValues => ({
   analysis: { n: "", p: "", k: "" },
   rateLbPer1000: "",
   quickReleaseN: false,
+  organic: false,
 });

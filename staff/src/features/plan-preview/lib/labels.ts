@@ -1,4 +1,4 @@
-import { SPECIES_FACTS, type HoldOffKind, type Phase, type Provenance, type Service, type Species, type WarningSeverity } from "#shared/engine/index";
+import { SPECIES_FACTS, type HoldOffKind, type Phase, type Provenance, type Service, type Species, type SprinklerType, type WarningSeverity } from "#shared/engine/index";
 import type { IrrigationKind, LawnCondition } from "./form-values.ts";
 
 /** Plain names for the engine's codes, as staff say them. */
@@ -24,6 +24,13 @@ export const IRRIGATION_LABELS: Record<IrrigationKind, string> = {
   in_ground: "In-ground sprinkler system",
   hose_end: "Hose-end sprinkler",
   none: "No sprinkler",
+};
+
+export const SPRINKLER_TYPE_LABELS: Record<SprinklerType, string> = {
+  fixed_spray: "Fixed spray heads",
+  rotor: "Rotor heads",
+  oscillating: "Hose-end, oscillating",
+  impact: "Hose-end, impact",
 };
 
 export const PHASE_LABELS: Record<Phase, string> = {
@@ -93,6 +100,7 @@ const FIELD_LABELS: Record<string, string> = {
   "property.irrigation.kind": "Watering",
   "property.irrigation.zones": "Zones",
   "property.irrigation.precipitationRateInPerHour": "Precipitation rate",
+  "property.irrigation.sprinklerType": "Sprinkler type",
   "property.currentMowingHeightIn": "Mowing height now",
   "property.mowerHighestSettingIn": "Mower's highest setting",
   "property.mowerSettingStepIn": "Mower step",

@@ -50,6 +50,7 @@ export function checkPreviewForm(values: PreviewFormValues): FormCheck {
         },
         rateLbPer1000: num(`visit.products.${i}.rateLbPer1000`, row.rateLbPer1000, true) as number,
         ...(row.quickReleaseN ? { quickReleaseN: true } : {}),
+        ...(row.organic ? { organic: true } : {}),
       })),
     },
     property: {
@@ -61,6 +62,7 @@ export function checkPreviewForm(values: PreviewFormValues): FormCheck {
       // Zones and sprinkler rate mean nothing without a sprinkler; the form keeps them in case it comes back.
       irrigation: {
         kind: irrigation.kind,
+        ...(hasSprinkler && irrigation.sprinklerType ? { sprinklerType: irrigation.sprinklerType } : {}),
         ...(hasSprinkler ? { zones: num("property.irrigation.zones", irrigation.zones, false) } : {}),
         ...(hasSprinkler
           ? { precipitationRateInPerHour: num("property.irrigation.precipitationRateInPerHour", irrigation.precipitationRateInPerHour, false) }

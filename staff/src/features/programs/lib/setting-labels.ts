@@ -9,7 +9,7 @@ export const settingLabels: Record<NumericSettingKey, string> = {
   wateringDaysAfterSprouts: "Light watering after sprouts show",
   establishmentDays: "Establishment phase",
   establishmentWateringsPerWeek: "Deep waterings a week while establishing",
-  deepWateringDepthIn: "Water per deep watering",
+  deepWateringDepthIn: "Most water per deep watering",
   maturingDays: "Maturing phase",
   maturingWateringsPerWeek: "Waterings a week while maturing",
   firstMowMinDays: "Earliest first mow after seeding",
