@@ -12,6 +12,7 @@ import { findPlanForUser } from "../plans/access.ts";
 import { photoUpload, uploadedBuffers } from "../photos/upload.ts";
 import { answerQuestion, askQuestion, readThread, type QuestionDeps } from "./service.ts";
 import { assignQuestion, openQuestions } from "./queue.ts";
+import { noticeOfAnswer, openQuestionCameBySms } from "../notices/service.ts";
 import { assignQuestionSchema, questionMessageParamsSchema } from "#shared/schemas/question-queue";
 
 const customerOnly = ["customer"] as const satisfies readonly Role[];
@@ -33,7 +34,7 @@ function planGuard(db: AppDeps["db"], access: readonly Role[]) {
   };
 }
 
-export function questionRoutes(deps: Pick<AppDeps, "config" | "db">, storage: PhotoStorage = photoStorageFromConfig(deps.config)): RouteSpec[] {
+export function questionRoutes(deps: Pick<AppDeps, "config" | "db" | "log">, storage: PhotoStorage = photoStorageFromConfig(deps.config)): RouteSpec[] {
   const service: QuestionDeps = { db: deps.db, storage };
   return [
     route({
@@ -83,7 +84,10 @@ export function questionRoutes(deps: Pick<AppDeps, "config" | "db">, storage: Ph
       before: [planGuard(deps.db, staff), photoUpload(answerPhotoLimit)],
       handler: async ({ req, res, user, params, body }) => {
         const plan = await findPlanForUser(deps.db, user, params.planId);
+        // Asked before the answer is stored: afterwards every question counts as answered.
+        const viaSms = await openQuestionCameBySms(deps.db, plan.planId);
         const message = await answerQuestion(service, user, plan, body.text, body.resolve ?? false, uploadedBuffers(req));
+        await noticeOfAnswer(deps.db, plan.planId, viaSms).catch((err) => deps.log(`answer notice for plan ${plan.planId} could not be queued`, err));
         res.status(201);
         return { message };
       },
