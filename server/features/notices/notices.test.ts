@@ -229,3 +229,19 @@ describe("every customer e-mail carries the conversation's reply address", () =>
     expect(mails[0]!.headers["reply-to"]).toMatch(new RegExp(`^reply\\+[A-Za-z0-9_-]{16,64}@${ctx.config.INBOUND_EMAIL_DOMAIN.replaceAll(".", "\\.")}$`));
   });
 });
+
+describe("links survive sign-in", () => {
+  it("a sign-in link asked for from a notice's page carries that page through sign-in/verify; other targets are refused", async () => {
+    const c = await customer({ phone: null });
+    await forgetSignInRequests(ctx);
+    const target = `/portal/messages?plan=${c.planId}`;
+    await request(ctx.app).post("/api/auth/link").set("X-Forwarded-For", freshIp()).send({ contact: c.email, next: target }).expect(202);
+    const link = (await waitForMessage(ctx.fakes, c.email!)).links.find((l) => l.includes("/portal/sign-in/verify"))!;
+    expect(new URL(link).searchParams.get("next")).toBe(target);
+
+    for (const next of ["//evil.example/portal/", "https://evil.example/portal/messages", "/staff/"]) {
+      const res = await request(ctx.app).post("/api/auth/link").set("X-Forwarded-For", freshIp()).send({ contact: c.email, next }).expect(400);
+      expect(res.body.error.fields).toHaveProperty("next");
+    }
+  });
+});
