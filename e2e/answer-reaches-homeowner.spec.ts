@@ -14,6 +14,9 @@ const homeowner = { email: "des.achterberg@mail.example", phone: "+13305550116",
 const technician = "marco@cobblefield.example";
 const fakesUrl = process.env.E2E_FAKES_URL ?? "http://127.0.0.1:5191";
 
+// The machine running browser tests may be busy: screens that load code get longer than the default 5 s.
+const patient = { timeout: 30_000 };
+
 type OutboxEntry = { to: string; text: string; links: string[]; receivedAt: string };
 async function outbox(page: Page): Promise<OutboxEntry[]> {
   return (await (await page.request.get(`${fakesUrl}/__outbox`)).json()).messages as OutboxEntry[];
@@ -40,10 +43,11 @@ test("an answer reaches the homeowner, whose link survives sign-in and opens the
   const homePage = await home.newPage();
   await signInHomeownerThroughOutbox(browser, homePage, homeowner.email);
   await homePage.goto("/portal/ask");
+  await expect(homePage.getByLabel("Your question")).toBeVisible(patient);
   await homePage.getByLabel("Your question").fill(question);
   await homePage.getByRole("button", { name: "Send question" }).click();
   await homePage.waitForURL(/\/portal\/messages$/);
-  await expect(homePage.getByRole("article").filter({ hasText: question })).toBeVisible();
+  await expect(homePage.getByRole("article").filter({ hasText: question })).toBeVisible(patient);
   await home.close();
 
   // A technician answers from the queue.
@@ -52,17 +56,17 @@ test("an answer reaches the homeowner, whose link survives sign-in and opens the
   await signInStaff(staffPage, technician);
   await staffPage.goto("/staff/questions");
   await staffPage.getByRole("listitem").filter({ hasText: question }).getByTestId("queue-question-link").click();
-  await expect(staffPage.getByRole("heading", { level: 1, name: new RegExp(`^Question from ${homeowner.firstName}`) })).toBeVisible();
+  await expect(staffPage.getByRole("heading", { level: 1, name: new RegExp(`^Question from ${homeowner.firstName}`) })).toBeVisible(patient);
   await staffPage.getByLabel("Your answer").fill(answer);
   await staffPage.getByRole("button", { name: "Send answer" }).click();
-  await expect(staffPage.getByRole("status").filter({ hasText: "Answer sent" })).toBeVisible();
-  await staff.close();
+  await expect(staffPage.getByRole("status").filter({ hasText: "Answer sent" })).toBeVisible(patient);
 
   // The notice goes to the homeowner's chosen channel (a text, by default) once the gathering delay is over.
   const notice = await linkFromOutbox(staffPage, homeowner.phone, /\/portal\/messages\?plan=\d+$/);
   expect(notice.text).toMatch(/^Cobblefield/);
   expect(notice.text).toContain("Marco");
   expect(notice.text).toContain("Leave it there and add a little seed");
+  await staff.close();
 
   // Opened on a phone that is not signed in: sign-in, keeping where the link was going.
   const phone = await browser.newContext({ viewport: { width: 360, height: 780 }, isMobile: true, hasTouch: true });
@@ -70,15 +74,16 @@ test("an answer reaches the homeowner, whose link survives sign-in and opens the
   await phonePage.goto(notice.link);
   await phonePage.waitForURL(/\/portal\/sign-in\?next=/);
   expect(new URL(phonePage.url()).searchParams.get("next")).toBe(new URL(notice.link).pathname + new URL(notice.link).search);
+  await expect(phonePage.getByLabel("E-mail address or mobile number")).toBeVisible(patient);
   await phonePage.getByLabel("E-mail address or mobile number").fill(homeowner.email);
   await phonePage.getByRole("button", { name: "Send me a sign-in link" }).click();
-  await expect(phonePage.getByRole("heading", { name: /check your messages/i })).toBeVisible();
+  await expect(phonePage.getByRole("heading", { name: /check your messages/i })).toBeVisible(patient);
 
   const signIn = await linkFromOutbox(phonePage, homeowner.email, /\/portal\/sign-in\/verify\?.*next=/);
   await phonePage.goto(signIn.link);
   await phonePage.waitForURL((url) => url.pathname === "/portal/messages" && url.search === new URL(notice.link).search);
   const answered = phonePage.getByRole("article").filter({ hasText: answer });
-  await expect(answered).toBeVisible();
+  await expect(answered).toBeVisible(patient);
   await expect(answered.getByText("New", { exact: true })).toBeVisible();
   await expectNoSeriousA11yViolations(phonePage);
   await phone.close();
