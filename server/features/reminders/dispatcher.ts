@@ -10,7 +10,7 @@ import { prepareBatch, type Decision } from "./prepare.ts";
 import { retryDelayMs, type ReminderSettings } from "./settings.ts";
 import type { SmsLookup } from "./sms-lookup.ts";
 import { unsubscribeHeaders } from "./unsubscribe.ts";
-import { replyAddress, replyTokenForPlan } from "../questions/reply-address.ts";
+import { replyAddress } from "../questions/reply-address.ts";
 
 /*
  * Drains due reminders: claim a batch (SKIP LOCKED + state change, so any number of workers can run),
@@ -183,7 +183,7 @@ export class ReminderDispatcher {
                 ...unsubscribeHeaders(this.deps.config, decision.recipient.customerId),
                 "Message-ID": messageIdFor(row, this.deps.config.PUBLIC_URL),
                 // A reply lands in the plan's conversation (the inbound listener files it by this address).
-                "Reply-To": replyAddress(await replyTokenForPlan(db, row.plan_id), this.deps.config.INBOUND_EMAIL_DOMAIN),
+                ...(decision.replyToken && { "Reply-To": replyAddress(decision.replyToken, this.deps.config.INBOUND_EMAIL_DOMAIN) }),
               },
             }));
     } catch (error) {

@@ -10,6 +10,7 @@ import { dailySummarySms, wateringNudgeSms } from "./templates/sms.ts";
 import type { Language, ReminderStep } from "./templates/wording.ts";
 import { planUrl, unsubscribeUrl } from "./unsubscribe.ts";
 import { composeNotice, isNoticeKind } from "../notices/compose.ts";
+import { replyTokensForPlans } from "../notices/reply-to.ts";
 
 /*
  * Between claiming a batch and sending it: one query for everything about the recipients, one for
@@ -34,7 +35,7 @@ export type Recipient = {
 };
 
 export type Decision =
-  | { action: "send"; row: ReminderRow; recipient: Recipient; to: string; subject: string | null; body: string; html: string | null }
+  | { action: "send"; row: ReminderRow; recipient: Recipient; to: string; subject: string | null; body: string; html: string | null; replyToken?: string }
   | { action: "hold"; row: ReminderRow; recipient: Recipient; until: Date }
   | { action: "finish"; row: ReminderRow; recipient: Recipient | undefined; state: FinalState; error: string | null; fallback: Channel | null };
 
@@ -202,5 +203,9 @@ export async function prepareBatch(db: Db, config: Pick<Config, "PUBLIC_URL" | "
     }
     await saveTexts(db, texts);
   }
+  // Every customer e-mail carries its conversation's reply address: one statement for the batch.
+  const emails = decisions.filter((d): d is Extract<Decision, { action: "send" }> => d.action === "send" && d.row.channel === "email");
+  const tokens = await replyTokensForPlans(db, emails.map((d) => d.row.plan_id));
+  for (const d of emails) d.replyToken = tokens.get(d.row.plan_id);
   return decisions;
 }
