@@ -217,6 +217,33 @@ describe("the welcome message", () => {
   });
 });
 
+describe("visit notices", () => {
+  it("a booked follow-up visit is texted with its day, arrival window, technician and what to do before it; a cancelled one that no longer exists is not sent", async () => {
+    const c = await customer();
+    const marcoUser = await ctx.db("users").where({ email: "marco@cobblefield.example" }).first<{ id: number }>("id");
+    const [visit] = await ctx.db("follow_up_visits")
+      .insert({ property_id: c.propertyId, plan_id: c.planId, status: "scheduled", scheduled_for: "2026-12-09", technician_id: marcoUser!.id, reason: "no_germination", arrival_start: "09:00", arrival_end: "11:00", customer_prep: "Please don't mow the day before." })
+      .returning<{ id: number }[]>("id");
+    expect(await queueNotice(ctx.db, { planId: c.planId, kind: "visit_update", context: { followUpId: visit!.id, change: "booked" } })).toEqual(["sms"]);
+    await drain();
+    const [text] = await outboxTo(c.phone);
+    expect(text!.text).toMatch(/^Cobblefield/);
+    expect(text!.text).toContain("A visit is booked on Wed, Dec 9 between 9:00 am and 11:00 am.");
+    expect(text!.text).toContain("Marco");
+    expect(text!.text).toContain("Please don't mow the day before.");
+    expect(text!.links).toEqual([`${ctx.config.PUBLIC_URL}/portal/plan/${c.planId}`]);
+
+    await ctx.fakes.clearOutbox();
+    await queueNotice(ctx.db, { planId: c.planId, kind: "visit_update", context: { followUpId: visit!.id, change: "cancelled" } });
+    await ctx.db("follow_up_visits").where({ id: visit!.id }).delete();
+    // The first notice already took this minute's slot, so the second is due a minute later: let that minute pass.
+    await ctx.db("reminders").where({ plan_id: c.planId, kind: "visit_update", state: "scheduled" }).update({ next_attempt_at: ctx.db.fn.now() });
+    await drain();
+    expect((await noticesOf(c.planId, "visit_update")).map((r) => `${r.state} ${r.last_error ?? ""}`)).toEqual(["sent ", "cancelled the follow-up visit is no longer on this plan"]);
+    expect(await outboxTo(c.phone)).toEqual([]);
+  });
+});
+
 describe("every customer e-mail carries the conversation's reply address", () => {
   it("a daily summary e-mail has Reply-To too", async () => {
     const zone = daytimeZone();

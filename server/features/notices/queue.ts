@@ -82,7 +82,6 @@ export async function queueNotice(db: Db, notice: { planId: number; kind: Notice
   const channels = await noticeChannels(db, recipient, context);
   const window = effectiveWindow({ start: recipient.window_start, end: recipient.window_end });
   const dueAt = noticeDueAt(now, recipient.time_zone, window, notice.gatherSeconds);
-  const local = localMomentAt(dueAt, recipient.time_zone);
   const queued: Channel[] = [];
   for (const channel of channels) {
     const waiting = db("reminders").where({ plan_id: notice.planId, kind: notice.kind, channel });
@@ -95,22 +94,29 @@ export async function queueNotice(db: Db, notice: { planId: number; kind: Notice
       const joined = await waiting.update({ context: JSON.stringify(context), updated_at: db.fn.now() });
       if (joined > 0) continue;
     }
-    const inserted = await db("reminders")
-      .insert({
-        customer_id: recipient.customer_id,
-        plan_id: notice.planId,
-        kind: notice.kind,
-        local_date: local.date,
-        local_time: local.time,
-        time_zone: recipient.time_zone,
-        channel,
-        due_at: dueAt,
-        next_attempt_at: dueAt,
-        context: JSON.stringify(context),
-      })
-      .onConflict(["plan_id", "kind", "local_date", "local_time", "channel"])
-      .ignore()
-      .returning("id");
+    // The ledger's dedupe key is per minute: a notice of an event right after the previous one was already sent
+    // (so nothing was waiting to join) would collide with it and be lost. It takes the next free minute instead.
+    let inserted: unknown[] = [];
+    for (let shift = 0; shift < 5 && inserted.length === 0; shift++) {
+      const due = shift === 0 ? dueAt : nextAllowedInstant(new Date(dueAt.getTime() + shift * 60_000), recipient.time_zone, window);
+      const local = localMomentAt(due, recipient.time_zone);
+      inserted = await db("reminders")
+        .insert({
+          customer_id: recipient.customer_id,
+          plan_id: notice.planId,
+          kind: notice.kind,
+          local_date: local.date,
+          local_time: local.time,
+          time_zone: recipient.time_zone,
+          channel,
+          due_at: due,
+          next_attempt_at: due,
+          context: JSON.stringify(context),
+        })
+        .onConflict(["plan_id", "kind", "local_date", "local_time", "channel"])
+        .ignore()
+        .returning("id");
+    }
     if (inserted.length > 0) queued.push(channel);
   }
   return queued;
