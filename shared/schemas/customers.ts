@@ -52,7 +52,8 @@ export const REMINDER_STATES = ["scheduled", "sending", "sent", "delivered", "fa
 export const customerReminderSchema = z.object({
   id: z.number().int(),
   planId: z.number().int(),
-  kind: z.enum(["daily_summary", "watering_nudge"]),
+  /** Plan reminders, and notices (answers, visit changes, the welcome) that ride on the same ledger. */
+  kind: z.enum(["daily_summary", "watering_nudge", "conversation_update", "visit_update", "welcome"]),
   channel: z.enum(["sms", "email"]),
   localDate: z.string(),
   localTime: z.string(),

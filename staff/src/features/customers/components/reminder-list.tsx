@@ -13,7 +13,13 @@ const stateLabels: Record<State, { label: string; className: string }> = {
   cancelled: { label: "Cancelled", className: "bg-rust-50 text-rust-700" },
   skipped_opted_out: { label: "Not sent (opted out)", className: "bg-rust-50 text-rust-700" },
 };
-const kindLabels: Record<CustomerReminder["kind"], string> = { daily_summary: "Daily summary", watering_nudge: "Watering nudge" };
+const kindLabels: Record<CustomerReminder["kind"], string> = {
+  daily_summary: "Daily summary",
+  watering_nudge: "Watering nudge",
+  conversation_update: "Answer notice",
+  visit_update: "Visit notice",
+  welcome: "Welcome message",
+};
 const channelLabels: Record<CustomerReminder["channel"], string> = { sms: "Text", email: "E-mail" };
 const stamp = new Intl.DateTimeFormat(undefined, { dateStyle: "medium", timeStyle: "short" });
 
