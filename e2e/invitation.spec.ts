@@ -2,12 +2,14 @@ import { expect, test } from "@playwright/test";
 import { expectNoSeriousA11yViolations, signInStaff } from "./support.ts";
 
 /**
- * Journey 1 of the brief: a visit is logged, the homeowner gets an invitation link, follows
- * it, and sees today's steps. The link is read from the fakes' outbox, as a demo would.
+ * Journey 1 of the brief: a visit is logged, the homeowner gets a welcome message with a one-tap
+ * sign-in link, follows it, and sees today's steps. The link is read from the fakes' outbox, as a
+ * demo would. The welcome waits out the (shortened) gathering delay and goes by the homeowner's
+ * default channel: a text, since Hana has a mobile number.
  */
 test("a logged seeding visit invites the homeowner, whose link opens today's steps", async ({ browser, page }) => {
   const fakesUrl = process.env.E2E_FAKES_URL ?? "http://127.0.0.1:5191";
-  const homeowner = "hana.sorbye@mail.example"; // seeded without a visit of her own
+  const homeowner = { email: "hana.sorbye@mail.example", phone: "+13305550117" }; // seeded without a visit of her own
 
   await signInStaff(page, "priya@cobblefield.example");
   const search = await page.request.get("/api/customers?q=Hana");
@@ -27,12 +29,12 @@ test("a logged seeding visit invites the homeowner, whose link opens today's ste
     },
   });
   expect(logged.status()).toBe(201);
-  expect((await logged.json()).invitationSent).toBe(true);
+  expect(await logged.json()).toMatchObject({ invitationSent: true, welcomeChannels: ["sms"] });
 
   let link: string | undefined;
   await expect(async () => {
-    const outbox = (await (await page.request.get(`${fakesUrl}/__outbox`)).json()).messages as { to: string; subject: string | null; links: string[] }[];
-    link = outbox.find((m) => m.to === homeowner && m.subject?.startsWith("Your lawn care plan"))?.links.find((l) => l.includes("/portal/sign-in/verify"));
+    const outbox = (await (await page.request.get(`${fakesUrl}/__outbox`)).json()).messages as { to: string; text: string; links: string[] }[];
+    link = outbox.find((m) => m.to === homeowner.phone && m.text.includes("plan is ready"))?.links.find((l) => l.includes("/portal/sign-in/verify"));
     expect(link).toBeDefined();
   }).toPass({ timeout: 15_000 });
 

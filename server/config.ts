@@ -42,6 +42,8 @@ const envSchema = z
     FAKES_CONTROL_URL: z.url().optional(),
     /** Where photos are stored (local-disk adapter); never a folder that is served statically. */
     PHOTO_DIR: z.string().min(1).default(".data/photos"),
+    /** How long a notice (answer, visit change, welcome) waits to gather later events; read by notices/queue.ts. */
+    NOTICE_GATHER_SECONDS: z.coerce.number().int().min(0).max(3600).default(180),
     SIGN_IN_LINK_MINUTES: z.coerce.number().int().min(1).max(60).default(15),
   })
   .superRefine((env, ctx) => {

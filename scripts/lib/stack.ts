@@ -148,6 +148,8 @@ export async function startStack(options: StackOptions): Promise<RunningStack> {
     INBOUND_SMTP_HOST: "127.0.0.1",
     INBOUND_SMTP_PORT: String(ports.inboundSmtp),
     SERVE_APPS: options.apps,
+    // Browser tests follow a notice from the action to the outbox: gather for seconds, not minutes, and poll often.
+    ...(options.nodeEnv === "test" && { NOTICE_GATHER_SECONDS: "1", REMINDER_POLL_MS: "500" }),
   };
   const server = startChild("server", "server/main.ts", serverEnv, quiet);
   await waitFor(`http://127.0.0.1:${ports.app}/api/health`, "the Sproutline server");

@@ -22,6 +22,8 @@ export type TestContext = {
 
 export async function createTestContext(env: Record<string, string> = {}): Promise<TestContext> {
   const fakes = await startFakes({ oauth: { accounts: fakeOAuthAccounts } });
+  // Notices read their gathering delay from the environment (notices/queue.ts); API tests drain at once.
+  process.env.NOTICE_GATHER_SECONDS ??= env.NOTICE_GATHER_SECONDS ?? "0";
   const config = loadConfig({
     NODE_ENV: "test",
     DATABASE_URL: inject("databaseUrl"),

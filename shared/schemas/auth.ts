@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { portalNextSchema } from "./next-path.ts";
 
 export const roles = ["customer", "technician", "manager"] as const;
 export const roleSchema = z.enum(roles);
@@ -12,6 +13,8 @@ export const signInLinkRequestSchema = z.object({
     .trim()
     .min(3, "Enter your e-mail address or mobile number")
     .max(254, "That is too long for an e-mail address or phone number"),
+  /** The portal page to land on after signing in with the link (a link that was opened signed out). */
+  next: portalNextSchema.optional(),
 });
 export type SignInLinkRequest = z.infer<typeof signInLinkRequestSchema>;
 

@@ -78,6 +78,8 @@ export const moveVisitSchema = z.object({ date: isoDateSchema });
 export const visitLoggedSchema = z.object({
   visitId: z.number().int(),
   planId: z.number().int(),
-  /** After a seeding visit the homeowner is sent a link to the new plan. */
+  /** A welcome message with a sign-in link to the new plan is queued for the homeowner. */
   invitationSent: z.boolean(),
+  /** The channels that welcome is queued on (none when the homeowner takes no messages). */
+  welcomeChannels: z.array(z.enum(["sms", "email"])),
 });

@@ -30,7 +30,7 @@ export const router = createBrowserRouter(
           loader: signedInLoader,
           children: [
             {
-              element: <RequireSignIn signInPath="/sign-in" allowedRoles={["customer"]} wrongRole={(user) => <StaffOnPortal user={user} />} />,
+              element: <RequireSignIn signInPath="/sign-in" keepTarget allowedRoles={["customer"]} wrongRole={(user) => <StaffOnPortal user={user} />} />,
               children: [
                 { index: true, loader: todayLoader(queryClient), lazy: () => import("../features/today/today-route.tsx").then((m) => ({ Component: m.TodayRoute })) },
                 { path: "plan", lazy: () => import("../features/plan/plan-route.tsx").then((m) => ({ Component: m.PlanRoute })) },

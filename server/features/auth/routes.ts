@@ -37,7 +37,7 @@ export function authRoutes(deps: SignInDeps): RouteSpec[] {
       access: "public",
       body: signInLinkRequestSchema,
       handler: async ({ req, res, body }) => {
-        await requestSignInLink(deps, body.contact, req.ip ?? "unknown");
+        await requestSignInLink(deps, body.contact, req.ip ?? "unknown", body.next);
         res.status(202).json({ ok: true });
       },
     }),

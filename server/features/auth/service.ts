@@ -17,7 +17,8 @@ export type SignInDeps = { config: Config; db: Db; messenger: Messenger; log: (m
  * Issues a one-time link when the contact belongs to an active homeowner. The caller
  * always answers the same way, so nobody can probe which addresses are customers.
  */
-export async function requestSignInLink(deps: SignInDeps, rawContact: string, ip: string): Promise<void> {
+/** `next`: an already validated portal path (see shared/schemas/next-path.ts) the link returns to after sign-in. */
+export async function requestSignInLink(deps: SignInDeps, rawContact: string, ip: string, next?: string): Promise<void> {
   const contact = parseContact(rawContact);
   if (!contact) {
     throw new HttpError(400, "invalid_input", "Some of the information is not valid.", {
@@ -42,7 +43,9 @@ export async function requestSignInLink(deps: SignInDeps, rawContact: string, ip
   const token = newSignInToken();
   const minutes = deps.config.SIGN_IN_LINK_MINUTES;
   await repo.insertToken(deps.db, { userId: user.id, tokenHash: hashToken(token), channel: contact.email ? "email" : "sms", minutes });
-  const link = `${deps.config.PUBLIC_URL}/portal/sign-in/verify?token=${token}`;
+  const url = new URL(`/portal/sign-in/verify?token=${token}`, deps.config.PUBLIC_URL);
+  if (next) url.searchParams.set("next", next);
+  const link = url.href;
 
   // Not awaited: waiting for the provider would make known addresses answer slower than unknown ones.
   void sendLink(deps, user.companyId, user.name, contact, link, minutes).catch((err) =>

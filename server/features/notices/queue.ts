@@ -1,7 +1,7 @@
 import type { Db } from "../../db.ts";
 import { loadPreferences } from "../preferences/repo.ts";
 import { deliveryChannels, type Channel } from "../reminders/channels.ts";
-import { effectiveWindow, nextAllowedInstant } from "../reminders/quiet-hours.ts";
+import { effectiveWindow, nextAllowedInstant, type SendWindow } from "../reminders/quiet-hours.ts";
 import { localMomentAt } from "../reminders/schedule.ts";
 
 /*
@@ -10,7 +10,7 @@ import { localMomentAt } from "../reminders/schedule.ts";
  * exactly-once sending, retries, fallbacks and outbox for free; their text is composed when a
  * worker first claims them, from what is true then.
  *
- * Gathering: a notice waits NOTICE_GATHER_MINUTES before it is due, and a later event of the same
+ * Gathering: a notice waits NOTICE_GATHER_MINUTES (NOTICE_GATHER_SECONDS in tests) before it is due, and a later event of the same
  * kind (and, for visits, the same visit) joins a notice that is still waiting instead of queuing a
  * second one, so three quick answers make one text, not a burst.
  */
@@ -18,6 +18,21 @@ export const NOTICE_KINDS = ["conversation_update", "visit_update", "welcome"] a
 export type NoticeKind = (typeof NOTICE_KINDS)[number];
 
 export const NOTICE_GATHER_MINUTES = 3;
+
+/**
+ * The gathering delay in seconds. Read from NOTICE_GATHER_SECONDS (validated in config.ts) rather
+ * than threaded through every caller: answers, visits and imports all queue notices, and only the
+ * test stacks shorten it so a browser test need not wait three minutes.
+ */
+export function noticeGatherSeconds(env: NodeJS.ProcessEnv = process.env): number {
+  const configured = Number(env.NOTICE_GATHER_SECONDS);
+  return env.NOTICE_GATHER_SECONDS !== undefined && Number.isInteger(configured) && configured >= 0 ? configured : NOTICE_GATHER_MINUTES * 60;
+}
+
+/** When a notice queued at `now` is due: after the gathering delay, moved to the next allowed time (even on another day). */
+export function noticeDueAt(now: Date, zone: string, window: SendWindow, gatherSeconds = noticeGatherSeconds()): Date {
+  return nextAllowedInstant(new Date(now.getTime() + gatherSeconds * 1000), zone, window);
+}
 
 export type VisitChange = "booked" | "moved" | "cancelled" | "done";
 export type NoticeContext = { followUpId?: number; change?: VisitChange; viaSms?: boolean };
@@ -59,15 +74,14 @@ export async function noticeChannels(db: Db, recipient: Recipient, context: Noti
  * delay and inside the hours they allow. Returns the channels a new row was queued on (none when
  * the event joined a waiting notice, the plan is not active, or the customer takes no messages).
  */
-export async function queueNotice(db: Db, notice: { planId: number; kind: NoticeKind; context?: NoticeContext; now?: Date }): Promise<Channel[]> {
+export async function queueNotice(db: Db, notice: { planId: number; kind: NoticeKind; context?: NoticeContext; now?: Date; gatherSeconds?: number }): Promise<Channel[]> {
   const now = notice.now ?? new Date();
   const context = notice.context ?? {};
   const recipient = await recipientOfPlan(db, notice.planId);
   if (!recipient) return [];
   const channels = await noticeChannels(db, recipient, context);
   const window = effectiveWindow({ start: recipient.window_start, end: recipient.window_end });
-  const dueAt = nextAllowedInstant(new Date(now.getTime() + NOTICE_GATHER_MINUTES * 60_000), recipient.time_zone, window);
-  const local = localMomentAt(dueAt, recipient.time_zone);
+  const dueAt = noticeDueAt(now, recipient.time_zone, window, notice.gatherSeconds);
   const queued: Channel[] = [];
   for (const channel of channels) {
     const waiting = db("reminders").where({ plan_id: notice.planId, kind: notice.kind, channel });
@@ -80,22 +94,29 @@ export async function queueNotice(db: Db, notice: { planId: number; kind: Notice
       const joined = await waiting.update({ context: JSON.stringify(context), updated_at: db.fn.now() });
       if (joined > 0) continue;
     }
-    const inserted = await db("reminders")
-      .insert({
-        customer_id: recipient.customer_id,
-        plan_id: notice.planId,
-        kind: notice.kind,
-        local_date: local.date,
-        local_time: local.time,
-        time_zone: recipient.time_zone,
-        channel,
-        due_at: dueAt,
-        next_attempt_at: dueAt,
-        context: JSON.stringify(context),
-      })
-      .onConflict(["plan_id", "kind", "local_date", "local_time", "channel"])
-      .ignore()
-      .returning("id");
+    // The ledger's dedupe key is per minute: a notice of an event right after the previous one was already sent
+    // (so nothing was waiting to join) would collide with it and be lost. It takes the next free minute instead.
+    let inserted: unknown[] = [];
+    for (let shift = 0; shift < 5 && inserted.length === 0; shift++) {
+      const due = shift === 0 ? dueAt : nextAllowedInstant(new Date(dueAt.getTime() + shift * 60_000), recipient.time_zone, window);
+      const local = localMomentAt(due, recipient.time_zone);
+      inserted = await db("reminders")
+        .insert({
+          customer_id: recipient.customer_id,
+          plan_id: notice.planId,
+          kind: notice.kind,
+          local_date: local.date,
+          local_time: local.time,
+          time_zone: recipient.time_zone,
+          channel,
+          due_at: due,
+          next_attempt_at: due,
+          context: JSON.stringify(context),
+        })
+        .onConflict(["plan_id", "kind", "local_date", "local_time", "channel"])
+        .ignore()
+        .returning("id");
+    }
     if (inserted.length > 0) queued.push(channel);
   }
   return queued;

@@ -14,6 +14,7 @@ import { answerQuestion, askQuestion, readThread, type QuestionDeps } from "./se
 import { assignQuestion, openQuestions } from "./queue.ts";
 import { answeredQuestionsQuerySchema, assignQuestionSchema, questionMessageParamsSchema } from "#shared/schemas/question-queue";
 import { recentlyAnswered } from "./answered.ts";
+import { noticeOfAnswer, openQuestionCameBySms } from "../notices/service.ts";
 
 const customerOnly = ["customer"] as const satisfies readonly Role[];
 const staff = ["technician", "manager"] as const satisfies readonly Role[];
@@ -34,7 +35,7 @@ function planGuard(db: AppDeps["db"], access: readonly Role[]) {
   };
 }
 
-export function questionRoutes(deps: Pick<AppDeps, "config" | "db">, storage: PhotoStorage = photoStorageFromConfig(deps.config)): RouteSpec[] {
+export function questionRoutes(deps: Pick<AppDeps, "config" | "db" | "log">, storage: PhotoStorage = photoStorageFromConfig(deps.config)): RouteSpec[] {
   const service: QuestionDeps = { db: deps.db, storage };
   return [
     route({
@@ -91,7 +92,10 @@ export function questionRoutes(deps: Pick<AppDeps, "config" | "db">, storage: Ph
       before: [planGuard(deps.db, staff), photoUpload(answerPhotoLimit)],
       handler: async ({ req, res, user, params, body }) => {
         const plan = await findPlanForUser(deps.db, user, params.planId);
+        // Asked before the answer is stored: afterwards every question counts as answered.
+        const viaSms = await openQuestionCameBySms(deps.db, plan.planId);
         const message = await answerQuestion(service, user, plan, body.text, body.resolve ?? false, uploadedBuffers(req));
+        await noticeOfAnswer(deps.db, plan.planId, viaSms).catch((err) => deps.log(`answer notice for plan ${plan.planId} could not be queued`, err));
         res.status(201);
         return { message };
       },

@@ -10,6 +10,7 @@ import { prepareBatch, type Decision } from "./prepare.ts";
 import { retryDelayMs, type ReminderSettings } from "./settings.ts";
 import type { SmsLookup } from "./sms-lookup.ts";
 import { unsubscribeHeaders } from "./unsubscribe.ts";
+import { replyAddress } from "../questions/reply-address.ts";
 
 /*
  * Drains due reminders: claim a batch (SKIP LOCKED + state change, so any number of workers can run),
@@ -32,7 +33,7 @@ import { unsubscribeHeaders } from "./unsubscribe.ts";
 
 export type DispatcherDeps = {
   db: Db;
-  config: Pick<Config, "PUBLIC_URL" | "SESSION_SECRET" | "EMAIL_FROM">;
+  config: Pick<Config, "PUBLIC_URL" | "SESSION_SECRET" | "EMAIL_FROM" | "INBOUND_EMAIL_DOMAIN">;
   messenger: Messenger;
   lookup: SmsLookup;
   settings: ReminderSettings;
@@ -178,7 +179,12 @@ export class ReminderDispatcher {
               subject: decision.subject ?? "",
               text: decision.body,
               html: decision.html ?? "",
-              headers: { ...unsubscribeHeaders(this.deps.config, decision.recipient.customerId), "Message-ID": messageIdFor(row, this.deps.config.PUBLIC_URL) },
+              headers: {
+                ...unsubscribeHeaders(this.deps.config, decision.recipient.customerId),
+                "Message-ID": messageIdFor(row, this.deps.config.PUBLIC_URL),
+                // A reply lands in the plan's conversation (the inbound listener files it by this address).
+                ...(decision.replyToken && { "Reply-To": replyAddress(decision.replyToken, this.deps.config.INBOUND_EMAIL_DOMAIN) }),
+              },
             }));
     } catch (error) {
       await this.failedAttempt(decision, error);

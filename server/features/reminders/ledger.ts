@@ -1,6 +1,7 @@
 import type { Db } from "../../db.ts";
 import type { Channel } from "./channels.ts";
 import type { ReminderKind } from "./plan-reminders.ts";
+import type { NoticeKind } from "../notices/queue.ts";
 
 /*
  * The reminders table as the worker uses it. Every state change is one conditional UPDATE, so two
@@ -17,7 +18,7 @@ export type ReminderRow = {
   id: number;
   customer_id: number;
   plan_id: number;
-  kind: ReminderKind;
+  kind: ReminderKind | NoticeKind;
   local_date: string;
   local_time: string;
   time_zone: string;
@@ -31,10 +32,12 @@ export type ReminderRow = {
   body: string | null;
   html: string | null;
   fallback_for: number | null;
+  /** Notices only: what the notice is about (see notices/queue.ts). */
+  context: { followUpId?: number; change?: "booked" | "moved" | "cancelled" | "done"; viaSms?: boolean } | null;
 };
 
 const returning = `r.id, r.customer_id, r.plan_id, r.kind, r.local_date, r.local_time, r.time_zone, r.channel, r.state, r.attempts,
-  r.attempt_started_at, r.in_doubt_since, r.provider_id, r.subject, r.body, r.html, r.fallback_for`;
+  r.attempt_started_at, r.in_doubt_since, r.provider_id, r.subject, r.body, r.html, r.fallback_for, r.context`;
 
 /**
  * Takes up to `limit` due rows for this worker: SKIP LOCKED lets concurrent workers take disjoint
@@ -149,6 +152,7 @@ export async function insertFallback(db: Db, failed: ReminderRow, channel: Chann
       due_at: db.fn.now(),
       next_attempt_at: db.fn.now(),
       fallback_for: failed.id,
+      context: failed.context ? JSON.stringify(failed.context) : null,
     })
     .onConflict(["plan_id", "kind", "local_date", "local_time", "channel"])
     .ignore()

@@ -9,6 +9,8 @@ import { dailySummaryEmail, wateringNudgeEmail } from "./templates/email.ts";
 import { dailySummarySms, wateringNudgeSms } from "./templates/sms.ts";
 import type { Language, ReminderStep } from "./templates/wording.ts";
 import { planUrl, unsubscribeUrl } from "./unsubscribe.ts";
+import { composeNotice, isNoticeKind } from "../notices/compose.ts";
+import { replyTokensForPlans } from "../notices/reply-to.ts";
 
 /*
  * Between claiming a batch and sending it: one query for everything about the recipients, one for
@@ -33,7 +35,7 @@ export type Recipient = {
 };
 
 export type Decision =
-  | { action: "send"; row: ReminderRow; recipient: Recipient; to: string; subject: string | null; body: string; html: string | null }
+  | { action: "send"; row: ReminderRow; recipient: Recipient; to: string; subject: string | null; body: string; html: string | null; replyToken?: string }
   | { action: "hold"; row: ReminderRow; recipient: Recipient; until: Date }
   | { action: "finish"; row: ReminderRow; recipient: Recipient | undefined; state: FinalState; error: string | null; fallback: Channel | null };
 
@@ -122,7 +124,7 @@ async function reserveIntros(db: Db, candidates: { reminderId: number; customerI
   return new Set(rows.map((r) => Number(r.reminder_id)));
 }
 
-function compose(row: ReminderRow, recipient: Recipient, steps: ReminderStep[], intro: boolean, config: Pick<Config, "PUBLIC_URL" | "SESSION_SECRET">) {
+function compose(row: ReminderRow & { kind: "daily_summary" | "watering_nudge" }, recipient: Recipient, steps: ReminderStep[], intro: boolean, config: Pick<Config, "PUBLIC_URL" | "SESSION_SECRET">) {
   const link = planUrl(config, row.plan_id);
   if (row.kind === "daily_summary") {
     if (steps.length === 0) return undefined;
@@ -163,7 +165,8 @@ export async function prepareBatch(db: Db, config: Pick<Config, "PUBLIC_URL" | "
     if (!isInsideWindow(now, row.time_zone, recipient.window)) {
       const until = nextAllowedInstant(now, row.time_zone, recipient.window);
       // Yesterday's plan summary is no use tomorrow morning: a reminder that can't go on its own day has failed.
-      if (localMomentAt(until, row.time_zone).date !== row.local_date) finish("failed", "could not be sent on its day (quiet hours after delays)");
+      // A notice (an answer, a visit, the welcome) is still news the next morning: it waits.
+      if (!isNoticeKind(row.kind) && localMomentAt(until, row.time_zone).date !== row.local_date) finish("failed", "could not be sent on its day (quiet hours after delays)");
       else decisions.push({ action: "hold", row, recipient, until });
       continue;
     }
@@ -172,21 +175,37 @@ export async function prepareBatch(db: Db, config: Pick<Config, "PUBLIC_URL" | "
   }
 
   if (needText.length > 0) {
-    const steps = await pendingSteps(db, needText.map((n) => n.row));
+    const notices = needText.filter((n) => isNoticeKind(n.row.kind));
+    const planRows = needText.filter((n) => !isNoticeKind(n.row.kind)) as { row: ReminderRow & { kind: "daily_summary" | "watering_nudge" }; recipient: Recipient }[];
+    const steps = await pendingSteps(db, planRows.map((n) => n.row));
     const stepsOf = (row: ReminderRow) => steps.get(`${row.plan_id}|${row.local_date}`) ?? [];
-    const sendable = needText.filter(({ row, recipient }) => {
+    const sendable = planRows.filter(({ row, recipient }) => {
       if (compose(row, recipient, stepsOf(row), false, config)) return true;
       decisions.push({ action: "finish", row, recipient, state: "cancelled", error: "nothing left to do that day", fallback: null });
       return false;
     });
-    const intros = await reserveIntros(db, sendable.filter((n) => n.row.channel === "sms").map((n) => ({ reminderId: Number(n.row.id), customerId: n.recipient.customerId })));
+    // A notice's text can only be known by composing it once (the welcome mints its sign-in link then), so its
+    // intro is reserved first; a notice that then turns out to have nothing to say gives the intro back when finished.
+    const intros = await reserveIntros(
+      db,
+      [...sendable, ...notices].filter((n) => n.row.channel === "sms").map((n) => ({ reminderId: Number(n.row.id), customerId: n.recipient.customerId })),
+    );
     const texts: { id: number; subject: string | null; body: string; html: string | null }[] = [];
-    for (const { row, recipient } of sendable) {
-      const text = compose(row, recipient, stepsOf(row), intros.has(Number(row.id)), config)!;
+    const send = (row: ReminderRow, recipient: Recipient, text: { subject: string | null; body: string; html: string | null }) => {
       texts.push({ id: row.id, ...text });
       decisions.push({ action: "send", row, recipient, to: (row.channel === "sms" ? recipient.phone : recipient.email)!, ...text });
+    };
+    for (const { row, recipient } of sendable) send(row, recipient, compose(row, recipient, stepsOf(row), intros.has(Number(row.id)), config)!);
+    for (const { row, recipient } of notices) {
+      const outcome = await composeNotice(db, config, row, recipient, intros.has(Number(row.id)));
+      if ("cancel" in outcome) decisions.push({ action: "finish", row, recipient, state: "cancelled", error: outcome.cancel, fallback: null });
+      else send(row, recipient, outcome);
     }
     await saveTexts(db, texts);
   }
+  // Every customer e-mail carries its conversation's reply address: one statement for the batch.
+  const emails = decisions.filter((d): d is Extract<Decision, { action: "send" }> => d.action === "send" && d.row.channel === "email");
+  const tokens = await replyTokensForPlans(db, emails.map((d) => d.row.plan_id));
+  for (const d of emails) d.replyToken = tokens.get(d.row.plan_id);
   return decisions;
 }

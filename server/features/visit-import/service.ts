@@ -4,6 +4,7 @@ import type { Db } from "../../db.ts";
 import { HttpError } from "../../http/errors.ts";
 import { currentProgram } from "../plans/program-repo.ts";
 import { createPlanForVisit, type PlanChangeHook } from "../plans/service.ts";
+import { noticeOfNewPlan } from "../notices/service.ts";
 import { insertVisit } from "../visits/repo.ts";
 import { analyseRow, keyOfRecord, type FileContext, type PendingInFile, type RowAnalysis } from "./analyse-row.ts";
 import { sha256Hex } from "./import-key.ts";
@@ -102,6 +103,8 @@ async function importRow(db: Db, ctx: FileContext, record: CsvRecord, onChange: 
       const { date, services, ...details } = a.visit;
       const visitId = await insertVisit(trx, { propertyId, technicianId: a.technicianId, date, services, details, notes: mapped.notes, importKey: a.key });
       const { planId } = await createPlanForVisit(trx, visitId, onChange);
+      // Queued with the plan, in its transaction: a row that rolls back sends no welcome.
+      await noticeOfNewPlan(trx, planId);
       return outcome("created", { visitId, planId, customerId });
     });
   } catch (err) {

@@ -7,8 +7,7 @@ import { findInCompany } from "../properties/repo.ts";
 import { createPlanForVisit, regeneratePlan, type PlanChangeHook } from "../plans/service.ts";
 import { planIdOfVisit } from "../plans/plans-repo.ts";
 import { insertVisit, loadVisitWithProperty, moveVisit } from "./repo.ts";
-import { inviteToPlan } from "../auth/invitation.ts";
-import { SEEDING_SERVICES } from "#shared/engine/index";
+import { noticeOfNewPlan } from "../notices/service.ts";
 
 const staff = ["technician", "manager"] as const;
 
@@ -39,15 +38,13 @@ export function visitRoutes(deps: AppDeps, onChange?: PlanChangeHook): RouteSpec
           const { planId } = await createPlanForVisit(trx, visitId, onChange);
           return { visitId, planId };
         });
-        // The visit is saved either way; a message that can't go out now is reported, not fatal.
-        const seeding = services.some((s) => (SEEDING_SERVICES as readonly string[]).includes(s));
-        const invitationSent = seeding
-          ? await inviteToPlan(deps, created.planId).catch((err) => {
-              deps.log(`invitation for plan ${created.planId} could not be sent`, err);
-              return false;
-            })
-          : false;
-        res.status(201).json({ ...created, invitationSent });
+        // The visit is saved either way; a welcome that can't be queued now is reported, not fatal. It goes out
+        // after the gathering delay, inside the homeowner's allowed hours, on the channels they take messages on.
+        const welcomeChannels = await noticeOfNewPlan(db, created.planId).catch((err) => {
+          deps.log(`welcome for plan ${created.planId} could not be queued`, err);
+          return [];
+        });
+        res.status(201).json({ ...created, invitationSent: welcomeChannels.length > 0, welcomeChannels });
       },
     }),
     route({

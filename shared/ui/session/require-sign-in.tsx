@@ -1,5 +1,5 @@
 import type { ReactNode } from "react";
-import { Navigate, Outlet } from "react-router-dom";
+import { Navigate, Outlet, useHref, useLocation } from "react-router-dom";
 import type { CurrentUser, Role } from "#shared/schemas/auth";
 import { ErrorState, LoadingState } from "../states.tsx";
 import { useMe } from "./get-me.ts";
@@ -11,11 +11,15 @@ export interface RequireSignInProps {
   allowedRoles: readonly Role[];
   /** Shown to a signed-in person whose role this app isn't for (e.g. a homeowner on the staff app). */
   wrongRole: (user: CurrentUser) => ReactNode;
+  /** Send the page asked for along as `?next=` (full path, basename included), so sign-in can return to it. */
+  keepTarget?: boolean;
 }
 
 /** Layout route: renders its child routes only for a signed-in person with an allowed role. */
-export function RequireSignIn({ signInPath, allowedRoles, wrongRole }: RequireSignInProps) {
+export function RequireSignIn({ signInPath, allowedRoles, wrongRole, keepTarget = false }: RequireSignInProps) {
   const me = useMe();
+  const location = useLocation();
+  const target = useHref(location);
   if (me.isPending) return <LoadingState label="Checking your sign-in…" />;
   if (me.isError) {
     return (
@@ -24,7 +28,7 @@ export function RequireSignIn({ signInPath, allowedRoles, wrongRole }: RequireSi
       </div>
     );
   }
-  if (!me.data) return <Navigate to={signInPath} replace />;
+  if (!me.data) return <Navigate to={keepTarget ? `${signInPath}?next=${encodeURIComponent(target)}` : signInPath} replace />;
   if (!allowedRoles.includes(me.data.role)) return <>{wrongRole(me.data)}</>;
   return <Outlet />;
 }

@@ -1,6 +1,6 @@
 import { useEffect, useRef, useState } from "react";
 import { useTranslation } from "react-i18next";
-import { Link, useLocation } from "react-router-dom";
+import { Link, useLocation, useSearchParams } from "react-router-dom";
 import type { PhotoRef, ThreadResponse } from "#shared/schemas/questions";
 import { EmptyState, ErrorState, Notice, Page, buttonClasses } from "#shared/ui/index";
 import { useQueryClient } from "@tanstack/react-query";
@@ -20,7 +20,14 @@ export function MessagesRoute() {
   const { t } = useTranslation();
   const location = useLocation();
   const justSent = (location.state as { sent?: boolean } | null)?.sent === true;
-  const { plansQuery, plans, selected } = useSelectedPlan();
+  // An answer notice links to /messages?plan=<id>: that plan's conversation wins over the one remembered here.
+  const [searchParams, setSearchParams] = useSearchParams();
+  const linkedPlan = Number(searchParams.get("plan"));
+  const { plansQuery, plans, selected } = useSelectedPlan(Number.isInteger(linkedPlan) && linkedPlan > 0 ? linkedPlan : undefined);
+  const switchPlan = (planId: number) => {
+    choosePlan(planId);
+    if (searchParams.has("plan")) setSearchParams({}, { replace: true });
+  };
 
   return (
     <Page
@@ -45,7 +52,7 @@ export function MessagesRoute() {
         <EmptyState title={t("messages.noPlan")} />
       ) : (
         <>
-          <PlanSwitcher plans={plans} selectedId={selected.id} onChange={choosePlan} />
+          <PlanSwitcher plans={plans} selectedId={selected.id} onChange={switchPlan} />
           <PlanThread planId={selected.id} />
         </>
       )}

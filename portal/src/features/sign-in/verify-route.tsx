@@ -2,6 +2,7 @@ import { useEffect, useRef } from "react";
 import { useTranslation } from "react-i18next";
 import { Navigate, useSearchParams } from "react-router-dom";
 import { signInLinkConsumeSchema } from "#shared/schemas/auth";
+import { portalRouterPath, safePortalNext } from "#shared/schemas/next-path";
 import { ErrorState, LoadingState, Page, isApiRequestError } from "#shared/ui/index";
 import { useConsumeSignInLink } from "./api/consume-link.ts";
 import { useErrorText } from "../../common/lib/use-error-text.ts";
@@ -10,7 +11,7 @@ import { LinkProblem } from "./components/link-problem.tsx";
 // invalid_input: the server's schema refused the token, which to a person is a broken link.
 const linkProblemCodes = new Set(["link_invalid", "link_expired", "link_used", "invalid_input"]);
 
-/** Landing page of the e-mailed/texted link: signs in once, then opens the care plan. */
+/** Landing page of the e-mailed/texted link: signs in once, then opens the page the link was for (else the care plan). */
 export function VerifyRoute() {
   const { t } = useTranslation();
   const [searchParams] = useSearchParams();
@@ -26,7 +27,10 @@ export function VerifyRoute() {
     consume.mutate(parsed.data);
   }, [parsed.success, parsed.data, consume]);
 
-  if (consume.isSuccess) return <Navigate to="/" replace />;
+  if (consume.isSuccess) {
+    const next = safePortalNext(searchParams.get("next"));
+    return <Navigate to={next ? portalRouterPath(next) : "/"} replace />;
+  }
 
   const failed = !parsed.success || consume.isError;
   let body;

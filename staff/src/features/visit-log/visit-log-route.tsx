@@ -82,8 +82,8 @@ export function VisitLogRoute() {
     // Kept on the device right now, not after the usual pause: the save may fail and the tab close.
     saveDraft(current, lawn);
     logVisit.mutate(checked.body, {
-      onSuccess: ({ visitId, planId, invitationSent }) => {
-        setSaved({ visitId, planId, invitationSent, lawn: lawn!, date: current.visit.date });
+      onSuccess: ({ visitId, planId, invitationSent, welcomeChannels }) => {
+        setSaved({ visitId, planId, invitationSent, welcomeChannels, lawn: lawn!, date: current.visit.date });
         startOver();
         window.scrollTo({ top: 0 });
       },

@@ -8,10 +8,12 @@ import { useRequestSignInLink } from "../api/request-link.ts";
 
 export interface RequestLinkFormProps {
   defaultContact?: string;
+  /** The portal page the link should return to (already checked to be one). */
+  next?: string;
   onSent: (contact: string) => void;
 }
 
-export function RequestLinkForm({ defaultContact = "", onSent }: RequestLinkFormProps) {
+export function RequestLinkForm({ defaultContact = "", next, onSent }: RequestLinkFormProps) {
   const { t } = useTranslation();
   const requestLink = useRequestSignInLink();
   const [formError, setFormError] = useState<string | null>(null);
@@ -22,7 +24,7 @@ export function RequestLinkForm({ defaultContact = "", onSent }: RequestLinkForm
 
   const onSubmit = form.handleSubmit((values) => {
     setFormError(null);
-    requestLink.mutate(values, {
+    requestLink.mutate(next ? { ...values, next } : values, {
       onSuccess: () => onSent(values.contact),
       onError: (error) => setFormError(applyServerErrors(error, form.setError, ["contact"])),
     });

@@ -6,9 +6,12 @@ export interface SavedVisit {
   visitId: number;
   planId: number;
   invitationSent: boolean;
+  welcomeChannels: readonly ("sms" | "email")[];
   lawn: ChosenLawn;
   date: string;
 }
+
+const channelWords = (channels: readonly ("sms" | "email")[]) => channels.map((c) => (c === "sms" ? "text" : "e-mail")).join(" and ");
 
 /** After a save: what was created and where to find it. */
 export function VisitSaved({ saved, onLogAnother }: { saved: SavedVisit; onLogAnother: () => void }) {
@@ -19,9 +22,12 @@ export function VisitSaved({ saved, onLogAnother }: { saved: SavedVisit; onLogAn
           Care plan {saved.planId} now follows this visit: watering, mowing and feeding dates for the homeowner.
         </Notice>
         {saved.invitationSent ? (
-          <Notice tone="info">{saved.lawn.customerName} has been sent a link to the new plan.</Notice>
+          <Notice tone="info">
+            Welcome message queued to {saved.lawn.customerName} by {channelWords(saved.welcomeChannels)}, with a sign-in link and the next days of the plan. It goes
+            out within a few minutes, inside the hours the homeowner allows.
+          </Notice>
         ) : (
-          <Notice tone="info">No invitation was sent (not a seeding visit, or no contact on file). The homeowner can still sign in to see the plan.</Notice>
+          <Notice tone="info">No welcome message was queued (no mobile number or e-mail on file, or the homeowner turned messages off). The homeowner can still sign in to see the plan.</Notice>
         )}
         <div className="flex flex-wrap gap-2">
           <Link to={`/customers/${saved.lawn.customerId}#plan-${saved.planId}`} className={buttonClasses("primary")} data-testid="saved-plan-link">
