@@ -5,6 +5,7 @@ import { holdOffEndSteps, holdOffsFor, holdOffWindows } from "./rules/hold-offs.
 import { mowingSteps } from "./rules/mowing.ts";
 import { prepSteps } from "./rules/prep.ts";
 import { leafCleanupSteps, thatchCleanupSteps } from "./rules/seasonal.ts";
+import { warningsForAudiences } from "./rules/audiences.ts";
 import { planWarnings } from "./rules/warnings.ts";
 import { wateringSteps } from "./rules/watering.ts";
 import { hashInput } from "./hash.ts";
@@ -12,7 +13,7 @@ import type { PlanInput } from "./schemas/plan-input.ts";
 import { sortSteps } from "./steps.ts";
 import { calculatorSummary } from "./summary.ts";
 import { CAUTION_IDS, CAUTIONS, type CautionId } from "./tables/cautions.ts";
-import type { HoldOff, PhaseRange, Plan, PlanStep } from "./types.ts";
+import type { HoldOff, PhaseRange, Plan, PlanStep, PlanWarning } from "./types.ts";
 
 /** Bump when the same input would produce a different plan, so stored plans can be told apart. */
 export const ENGINE_VERSION = 1;
@@ -21,6 +22,16 @@ export const ENGINE_VERSION = 1;
 function applySkips(ctx: PlanContext, steps: PlanStep[]): PlanStep[] {
   if (ctx.skippedKeys.size === 0) return steps;
   return steps.map((s) => (ctx.skippedKeys.has(s.key) && s.state === undefined ? { ...s, state: "skipped" } : s));
+}
+
+/*
+ * A plan made on `options.today` for a visit already past (logged today, or imported) starts on
+ * that day: steps before it can no longer be done, so they are left out rather than shown as
+ * missed. Same rule as recomputePlan, which only ever takes a fresh plan from today on.
+ */
+function fromToday(ctx: PlanContext, steps: PlanStep[]): PlanStep[] {
+  const today = ctx.input.options.today;
+  return today === undefined ? steps : steps.filter((s) => s.date >= today);
 }
 
 function phaseRanges(ctx: PlanContext, prep: readonly PlanStep[]): PhaseRange[] {
@@ -45,6 +56,15 @@ function cautionsUsed(groups: readonly (readonly { cautions: readonly CautionId[
 }
 
 /**
+ * The warnings a visit would get, without the rest of the plan: cheap enough to run on every
+ * keystroke of the visit form.
+ */
+export function visitWarnings(input: PlanInput): PlanWarning[] {
+  const ctx = buildContext(input);
+  return warningsForAudiences(ctx, planWarnings(ctx));
+}
+
+/**
  * The care plan for one visit. Pure and deterministic: it reads no clock and
  * no zone but the property's, so the same (already validated) input always
  * gives a deep-equal plan. Validate untrusted input with parsePlanInput first.
@@ -53,17 +73,20 @@ export function generatePlan(input: PlanInput): Plan {
   const ctx = buildContext(input);
   const windows = holdOffWindows(ctx);
   const holdOffs: HoldOff[] = holdOffsFor(ctx, windows);
-  const prep = sortSteps(applySkips(ctx, prepSteps(ctx)));
+  const prep = sortSteps(fromToday(ctx, applySkips(ctx, prepSteps(ctx))));
   const steps = sortSteps(
-    applySkips(ctx, [
-      ...thatchCleanupSteps(ctx),
-      ...wateringSteps(ctx),
-      ...mowingSteps(ctx),
-      ...feedingSteps(ctx, windows),
-      ...holdOffEndSteps(ctx, windows),
-      ...leafCleanupSteps(ctx),
-      ...checkInSteps(ctx),
-    ]),
+    fromToday(
+      ctx,
+      applySkips(ctx, [
+        ...thatchCleanupSteps(ctx),
+        ...wateringSteps(ctx),
+        ...mowingSteps(ctx),
+        ...feedingSteps(ctx, windows),
+        ...holdOffEndSteps(ctx, windows),
+        ...leafCleanupSteps(ctx),
+        ...checkInSteps(ctx),
+      ]),
+    ),
   );
   const { timeline } = ctx;
   return {
@@ -83,7 +106,7 @@ export function generatePlan(input: PlanInput): Plan {
     prepSteps: prep,
     steps,
     holdOffs,
-    warnings: planWarnings(ctx),
+    warnings: warningsForAudiences(ctx, planWarnings(ctx)),
     summary: calculatorSummary(ctx),
     cautions: cautionsUsed([prep, steps, holdOffs]),
   };

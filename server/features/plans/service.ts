@@ -1,4 +1,4 @@
-import { generatePlan, parsePlanInput, recomputePlan, type Observation, type Plan, type PlanInputRaw, type ProgramSettings } from "#shared/engine/index";
+import { generatePlan, homeownerWarnings, parsePlanInput, recomputePlan, type Observation, type Plan, type PlanInputRaw, type ProgramSettings } from "#shared/engine/index";
 import type { StoredPlan, TodayResponse } from "#shared/schemas/plans";
 import type { Db } from "../../db.ts";
 import { HttpError, notFound } from "../../http/errors.ts";
@@ -7,6 +7,7 @@ import { loadVisitWithProperty, type VisitWithProperty } from "../visits/repo.ts
 import type { SessionUser } from "../../auth/session-user.ts";
 import { currentProgram, programVersion } from "./program-repo.ts";
 import * as plans from "./plans-repo.ts";
+import type { PlanRow } from "./plans-repo.ts";
 import * as steps from "./steps-repo.ts";
 import { loadToday } from "./today-repo.ts";
 import { maySee } from "./access.ts";
@@ -37,7 +38,8 @@ export async function createPlanForVisit(trx: Db, visitId: number, onChange?: Pl
   const visit = await loadVisitWithProperty(trx, visitId);
   if (!visit) throw notFound("That visit");
   const program = await currentProgram(trx, visit.companyId);
-  const raw = engineInput(visit, program);
+  // Made on today's local date, so a visit logged today or imported from the past has no step born missed.
+  const raw = engineInput(visit, program, { today: localDateAt(visit.timeZone) });
   const plan = generatePlan(parseStored(raw));
   const planId = await plans.insertPlan(trx, { propertyId: visit.propertyId, visitId, input: raw, plan });
   await steps.syncSteps(trx, planId, [...plan.prepSteps, ...plan.steps]);
@@ -70,6 +72,15 @@ export async function regeneratePlan(db: Db, planId: number, change: { observati
   });
 }
 
+/**
+ * The warnings a reader is sent: a customer only the homeowner ones, staff all of them. Warnings
+ * stored before audiences existed have none, so they reach staff only (as crew warnings).
+ */
+function warningsFor(reader: SessionUser | undefined, stored: PlanRow["warnings"]): StoredPlan["warnings"] {
+  if (reader?.role === "customer") return homeownerWarnings(stored).map((w) => ({ ...w, audience: "homeowner" }));
+  return stored.map((w) => ({ ...w, audience: w.audience ?? "crew" }));
+}
+
 /** The whole plan; with `reader`, only if they may see it (checked on the row it loads anyway). */
 export async function loadStoredPlan(db: Db, planId: number, reader?: SessionUser): Promise<StoredPlan> {
   const row = await plans.loadPlanRow(db, planId);
@@ -81,7 +92,7 @@ export async function loadStoredPlan(db: Db, planId: number, reader?: SessionUse
     phases: meta.phases.map((p) => ({ ...p })),
     firstMowDate: meta.firstMowDate,
     holdOffs: row.hold_offs.map((h) => ({ ...h, cautions: [...h.cautions] })),
-    warnings: [...row.warnings],
+    warnings: warningsFor(reader, row.warnings),
     cautions: cautions.map((c) => ({ ...c })),
     figures: summary as unknown as Record<string, unknown>,
     steps: stepRows.map(steps.toStoredStep),
@@ -102,7 +113,7 @@ export async function todayView(db: Db, user: SessionUser, planId: number, now =
     steps: row.steps.map(steps.toStoredStep),
     activeHoldOffs: row.hold_offs.filter((h) => h.start <= today && today <= h.end).map((h) => ({ ...h, cautions: [...h.cautions] })),
     nextMilestone: row.next_milestone,
-    warnings: [...row.warnings],
+    warnings: warningsFor(user, row.warnings),
     cautions: row.cautions.map((c) => ({ ...c })),
   };
 }
