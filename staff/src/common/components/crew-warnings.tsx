@@ -30,6 +30,7 @@ export function CrewWarnings({
   emptyText = "No warnings for this visit.",
   showHomeowner = true,
   live = false,
+  headingLevel = 3,
 }: {
   warnings: readonly Warning[];
   title?: string;
@@ -37,15 +38,17 @@ export function CrewWarnings({
   showHomeowner?: boolean;
   /** Announce changes to screen readers, for a list that follows what is being typed. */
   live?: boolean;
+  headingLevel?: 2 | 3;
 }) {
   const headingId = useId();
+  const Heading = headingLevel === 2 ? "h2" : "h3";
   const crew = bySeverity(warnings.filter((w) => w.audience === "crew"));
   const homeowner = bySeverity(warnings.filter((w) => w.audience === "homeowner"));
   return (
     <section aria-labelledby={headingId} className="flex flex-col gap-3">
-      <h3 id={headingId} className="text-xl text-pine-900">
+      <Heading id={headingId} className="text-xl text-pine-900">
         {title}
-      </h3>
+      </Heading>
       <div aria-live={live ? "polite" : undefined} className="flex flex-col gap-3">
         {crew.length === 0 ? (
           <p className="text-ink-soft">{emptyText}</p>
