@@ -38,10 +38,10 @@ export function CrewWarnings({
   showHomeowner?: boolean;
   /** Announce changes to screen readers, for a list that follows what is being typed. */
   live?: boolean;
-  headingLevel?: 2 | 3;
+  headingLevel?: 2 | 3 | 4;
 }) {
   const headingId = useId();
-  const Heading = headingLevel === 2 ? "h2" : "h3";
+  const Heading = (["h2", "h3", "h4"] as const)[headingLevel - 2]!;
   const crew = bySeverity(warnings.filter((w) => w.audience === "crew"));
   const homeowner = bySeverity(warnings.filter((w) => w.audience === "homeowner"));
   return (
