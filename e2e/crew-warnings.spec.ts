@@ -10,6 +10,8 @@ import { expectNoSeriousA11yViolations, signInHomeownerThroughOutbox, signInStaf
 const homeowner = "des.achterberg@mail.example";
 
 test("a seed rate far above the range warns the technician live, and the homeowner's Today shows no crew rebuke", async ({ page, browser }) => {
+  // Two sign-ins (staff, then the homeowner through the outbox) and a save: longer than the usual minute.
+  test.setTimeout(180_000);
   await signInStaff(page, "marco@cobblefield.example");
   await page.goto("/staff/visits/new");
   await expect(page.getByRole("heading", { level: 1, name: "Log a visit" })).toBeVisible();
