@@ -97,7 +97,8 @@ async function seedVisit(knex: Knex, companyId: number, technicianId: number | n
       details: { seedMix: v.seedMix, seedRateLbPer1000: v.seedRateLbPer1000, areaFt2: v.lawnAreaFt2, products: v.products },
       importKey,
     });
-    const { planId } = await createPlanForVisit(trx, visitId);
+    // As if the plan had been made when the visit was logged, so the season has its past days.
+    const { planId } = await createPlanForVisit(trx, visitId, undefined, { madeOn: v.date });
     await tickOffSteps(trx, planId, user!.id, v.adherence);
     return { planId, propertyId: property!.id, visitDate: v.date };
   });
