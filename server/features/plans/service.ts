@@ -36,19 +36,19 @@ function parseStored(raw: PlanInputRaw) {
 /**
  * Creates the care plan of a visit and all its steps; call inside the visit's transaction.
  * The plan starts on the day it is made (today in the lawn's zone), so a visit logged today or
- * imported from the past has no step born missed. `madeOn` is only for demo data that plays back
- * a season as if each plan had been made on an earlier day.
+ * imported from the past has no step born missed. `bookedAhead` is only for demo data that plays
+ * back a season: plans made when their visit was booked, before any of their steps, prep included.
  */
 export async function createPlanForVisit(
   trx: Db,
   visitId: number,
   onChange?: PlanChangeHook,
-  options: { madeOn?: string } = {},
+  options: { bookedAhead?: boolean } = {},
 ): Promise<{ planId: number; plan: Plan }> {
   const visit = await loadVisitWithProperty(trx, visitId);
   if (!visit) throw notFound("That visit");
   const program = await currentProgram(trx, visit.companyId);
-  const raw = engineInput(visit, program, { today: options.madeOn ?? localDateAt(visit.timeZone) });
+  const raw = engineInput(visit, program, options.bookedAhead ? {} : { today: localDateAt(visit.timeZone) });
   const plan = generatePlan(parseStored(raw));
   const planId = await plans.insertPlan(trx, { propertyId: visit.propertyId, visitId, input: raw, plan });
   await steps.syncSteps(trx, planId, [...plan.prepSteps, ...plan.steps]);
