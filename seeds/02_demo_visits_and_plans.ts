@@ -41,7 +41,8 @@ export async function seed(knex: Knex): Promise<void> {
         details: { seedMix: [...v.seedMix], ...("seedRateLbPer1000" in v ? { seedRateLbPer1000: v.seedRateLbPer1000 } : {}), areaFt2: customer.lawnAreaFt2, products: [...v.products] },
         importKey,
       });
-      await createPlanForVisit(trx, visitId);
+      // The demo's visits were booked ahead: each plan was made before its first step, prep steps included.
+      await createPlanForVisit(trx, visitId, undefined, { bookedAhead: true });
     });
   }
 }

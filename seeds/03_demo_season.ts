@@ -97,7 +97,8 @@ async function seedVisit(knex: Knex, companyId: number, technicianId: number | n
       details: { seedMix: v.seedMix, seedRateLbPer1000: v.seedRateLbPer1000, areaFt2: v.lawnAreaFt2, products: v.products },
       importKey,
     });
-    const { planId } = await createPlanForVisit(trx, visitId);
+    // The season's visits were booked ahead: each plan was made before its first step, prep steps included.
+    const { planId } = await createPlanForVisit(trx, visitId, undefined, { bookedAhead: true });
     await tickOffSteps(trx, planId, user!.id, v.adherence);
     return { planId, propertyId: property!.id, visitDate: v.date };
   });

@@ -6,6 +6,7 @@ import { mowingSteps } from "./rules/mowing.ts";
 import { aerationCoreSteps, prepSteps } from "./rules/prep.ts";
 import { leafCleanupSteps, thatchCleanupSteps } from "./rules/seasonal.ts";
 import { nitrogenWarnings } from "./rules/nitrogen-warnings.ts";
+import { warningsForAudiences } from "./rules/audiences.ts";
 import { planWarnings } from "./rules/warnings.ts";
 import { wateringSteps } from "./rules/watering.ts";
 import { hashInput } from "./hash.ts";
@@ -13,7 +14,7 @@ import type { PlanInput } from "./schemas/plan-input.ts";
 import { sortSteps } from "./steps.ts";
 import { calculatorSummary } from "./summary.ts";
 import { CAUTION_IDS, CAUTIONS, type CautionId } from "./tables/cautions.ts";
-import type { HoldOff, PhaseRange, Plan, PlanStep } from "./types.ts";
+import type { HoldOff, PhaseRange, Plan, PlanStep, PlanWarning } from "./types.ts";
 
 /** Bump when the same input would produce a different plan, so stored plans can be told apart. */
 export const ENGINE_VERSION = 2;
@@ -22,6 +23,16 @@ export const ENGINE_VERSION = 2;
 function applySkips(ctx: PlanContext, steps: PlanStep[]): PlanStep[] {
   if (ctx.skippedKeys.size === 0) return steps;
   return steps.map((s) => (ctx.skippedKeys.has(s.key) && s.state === undefined ? { ...s, state: "skipped" } : s));
+}
+
+/*
+ * A plan made on `options.today` for a visit already past (logged today, or imported) starts on
+ * that day: steps before it can no longer be done, so they are left out rather than shown as
+ * missed. Same rule as recomputePlan, which only ever takes a fresh plan from today on.
+ */
+function fromToday(ctx: PlanContext, steps: PlanStep[]): PlanStep[] {
+  const today = ctx.input.options.today;
+  return today === undefined ? steps : steps.filter((s) => s.date >= today);
 }
 
 function phaseRanges(ctx: PlanContext, prep: readonly PlanStep[]): PhaseRange[] {
@@ -46,6 +57,15 @@ function cautionsUsed(groups: readonly (readonly { cautions: readonly CautionId[
 }
 
 /**
+ * The warnings a visit would get, without the rest of the plan: cheap enough to run on every
+ * keystroke of the visit form.
+ */
+export function visitWarnings(input: PlanInput): PlanWarning[] {
+  const ctx = buildContext(input);
+  return warningsForAudiences(ctx, planWarnings(ctx));
+}
+
+/**
  * The care plan for one visit. Pure and deterministic: it reads no clock and
  * no zone but the property's, so the same (already validated) input always
  * gives a deep-equal plan. Validate untrusted input with parsePlanInput first.
@@ -54,18 +74,21 @@ export function generatePlan(input: PlanInput): Plan {
   const ctx = buildContext(input);
   const windows = holdOffWindows(ctx);
   const holdOffs: HoldOff[] = holdOffsFor(ctx, windows);
-  const prep = sortSteps(applySkips(ctx, prepSteps(ctx)));
+  const prep = sortSteps(fromToday(ctx, applySkips(ctx, prepSteps(ctx))));
   const steps = sortSteps(
-    applySkips(ctx, [
-      ...thatchCleanupSteps(ctx),
-      ...aerationCoreSteps(ctx),
-      ...wateringSteps(ctx),
-      ...mowingSteps(ctx),
-      ...feedingSteps(ctx, windows),
-      ...holdOffEndSteps(ctx, windows),
-      ...leafCleanupSteps(ctx),
-      ...checkInSteps(ctx),
-    ]),
+    fromToday(
+      ctx,
+      applySkips(ctx, [
+        ...thatchCleanupSteps(ctx),
+        ...aerationCoreSteps(ctx),
+        ...wateringSteps(ctx),
+        ...mowingSteps(ctx),
+        ...feedingSteps(ctx, windows),
+        ...holdOffEndSteps(ctx, windows),
+        ...leafCleanupSteps(ctx),
+        ...checkInSteps(ctx),
+      ]),
+    ),
   );
   const { timeline } = ctx;
   return {
@@ -85,7 +108,7 @@ export function generatePlan(input: PlanInput): Plan {
     prepSteps: prep,
     steps,
     holdOffs,
-    warnings: [...planWarnings(ctx), ...nitrogenWarnings(ctx)],
+    warnings: warningsForAudiences(ctx, [...planWarnings(ctx), ...nitrogenWarnings(ctx)]),
     summary: calculatorSummary(ctx),
     cautions: cautionsUsed([prep, steps, holdOffs]),
   };

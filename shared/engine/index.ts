@@ -3,7 +3,8 @@
  * IANA zone are inputs. Validate API bodies with parsePlanInput, then call
  * generatePlan / recomputePlan with the parsed value.
  */
-export { generatePlan, ENGINE_VERSION } from "./generate.ts";
+export { generatePlan, visitWarnings, ENGINE_VERSION } from "./generate.ts";
+export { homeownerWarnings } from "./rules/audiences.ts";
 export { recomputePlan, type PreviousPlan } from "./recompute.ts";
 export { parsePlanInput, fieldErrorsFrom, ROOT_FIELD, type FieldErrors, type ParseResult } from "./schemas/parse.ts";
 export {

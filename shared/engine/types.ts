@@ -68,13 +68,25 @@ export interface HoldOff {
 
 export type WarningSeverity = "risk" | "caution" | "info";
 
-export interface PlanWarning {
+/** Who a warning is written for: the crew doing the work, or the homeowner looking after the lawn. */
+export type WarningAudience = "crew" | "homeowner";
+
+/** What a warning rule found, before it is worded for anyone (rules/audiences.ts does that). */
+export interface WarningFinding {
   readonly code: string;
   readonly severity: WarningSeverity;
   readonly message: string;
   readonly reason: string;
   readonly source: string;
   readonly provenance: Provenance;
+}
+
+/**
+ * A finding told to one audience. A finding that matters to both appears twice under the same
+ * code: once in the crew's terms, once in plain words for the homeowner (never blaming the crew).
+ */
+export interface PlanWarning extends WarningFinding {
+  readonly audience: WarningAudience;
 }
 
 export interface SpeciesSeedSummary {

@@ -43,6 +43,8 @@ export type StoredHoldOff = z.infer<typeof holdOffSchema>;
 
 export const planWarningSchema = z.object({
   code: z.string(),
+  /** Customers are only ever sent "homeowner" warnings; staff get both. */
+  audience: z.enum(["crew", "homeowner"]),
   severity: z.enum(["risk", "caution", "info"]),
   message: z.string(),
   reason: z.string(),

@@ -16,4 +16,7 @@ export const propertySummarySchema = z.object({
 });
 export type PropertySummary = z.infer<typeof propertySummarySchema>;
 export const propertyListSchema = z.object({ properties: z.array(propertySummarySchema) });
-export const propertyResponseSchema = z.object({ property: propertySummarySchema });
+/** One lawn read on its own: also the facts the care-plan engine reads (grass, sprinklers, mowing, frost), checked by the engine's parser where used. */
+export const propertyDetailSchema = propertySummarySchema.extend({ lawn: z.record(z.string(), z.unknown()) });
+export type PropertyDetail = z.infer<typeof propertyDetailSchema>;
+export const propertyResponseSchema = z.object({ property: propertyDetailSchema });

@@ -23,7 +23,8 @@ export type PlanRow = HeaderRow & {
   customer_id: number;
   observations: unknown[];
   hold_offs: Plan["holdOffs"];
-  warnings: Plan["warnings"];
+  /** Rows stored before warnings had an audience lack it. */
+  warnings: (Omit<Plan["warnings"][number], "audience"> & { audience?: Plan["warnings"][number]["audience"] })[];
   figures: { summary: Plan["summary"]; meta: Plan["meta"]; cautions: Plan["cautions"] };
 };
 

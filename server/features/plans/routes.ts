@@ -92,7 +92,8 @@ export function planRoutes(deps: AppDeps, onChange?: PlanChangeHook): RouteSpec[
       handler: async ({ user, params, body }) => {
         await findPlanForUser(db, user, params.planId);
         await regeneratePlan(db, params.planId, { observation: body }, onChange);
-        return { plan: await loadStoredPlan(db, params.planId) };
+        // With the reader, so a customer reporting sprouts gets the homeowner warnings only.
+        return { plan: await loadStoredPlan(db, params.planId, user) };
       },
     }),
     route({
@@ -104,7 +105,7 @@ export function planRoutes(deps: AppDeps, onChange?: PlanChangeHook): RouteSpec[
       handler: async ({ user, params }) => {
         await findPlanForUser(db, user, params.planId);
         await regeneratePlan(db, params.planId, {}, onChange);
-        return { plan: await loadStoredPlan(db, params.planId) };
+        return { plan: await loadStoredPlan(db, params.planId, user) };
       },
     }),
   ];

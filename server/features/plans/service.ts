@@ -1,4 +1,4 @@
-import { generatePlan, parsePlanInput, recomputePlan, type Observation, type Plan, type PlanInputRaw, type ProgramSettings } from "#shared/engine/index";
+import { generatePlan, homeownerWarnings, parsePlanInput, recomputePlan, type Observation, type Plan, type PlanInputRaw, type ProgramSettings } from "#shared/engine/index";
 import type { StoredPlan, TodayResponse } from "#shared/schemas/plans";
 import type { Db } from "../../db.ts";
 import { HttpError, notFound } from "../../http/errors.ts";
@@ -7,6 +7,7 @@ import { loadVisitWithProperty, type VisitWithProperty } from "../visits/repo.ts
 import type { SessionUser } from "../../auth/session-user.ts";
 import { currentProgram, programVersion } from "./program-repo.ts";
 import * as plans from "./plans-repo.ts";
+import type { PlanRow } from "./plans-repo.ts";
 import * as steps from "./steps-repo.ts";
 import { loadToday } from "./today-repo.ts";
 import { maySee } from "./access.ts";
@@ -32,12 +33,22 @@ function parseStored(raw: PlanInputRaw) {
   return parsed.value;
 }
 
-/** Creates the care plan of a visit and all its steps; call inside the visit's transaction. */
-export async function createPlanForVisit(trx: Db, visitId: number, onChange?: PlanChangeHook): Promise<{ planId: number; plan: Plan }> {
+/**
+ * Creates the care plan of a visit and all its steps; call inside the visit's transaction.
+ * The plan starts on the day it is made (today in the lawn's zone), so a visit logged today or
+ * imported from the past has no step born missed. `bookedAhead` is only for demo data that plays
+ * back a season: plans made when their visit was booked, before any of their steps, prep included.
+ */
+export async function createPlanForVisit(
+  trx: Db,
+  visitId: number,
+  onChange?: PlanChangeHook,
+  options: { bookedAhead?: boolean } = {},
+): Promise<{ planId: number; plan: Plan }> {
   const visit = await loadVisitWithProperty(trx, visitId);
   if (!visit) throw notFound("That visit");
   const program = await currentProgram(trx, visit.companyId);
-  const raw = engineInput(visit, program);
+  const raw = engineInput(visit, program, options.bookedAhead ? {} : { today: localDateAt(visit.timeZone) });
   const plan = generatePlan(parseStored(raw));
   const planId = await plans.insertPlan(trx, { propertyId: visit.propertyId, visitId, input: raw, plan });
   await steps.syncSteps(trx, planId, [...plan.prepSteps, ...plan.steps]);
@@ -70,6 +81,15 @@ export async function regeneratePlan(db: Db, planId: number, change: { observati
   });
 }
 
+/**
+ * The warnings a reader is sent: a customer only the homeowner ones, staff all of them. Warnings
+ * stored before audiences existed have none, so they reach staff only (as crew warnings).
+ */
+function warningsFor(reader: SessionUser | undefined, stored: PlanRow["warnings"]): StoredPlan["warnings"] {
+  if (reader?.role === "customer") return homeownerWarnings(stored).map((w) => ({ ...w, audience: "homeowner" }));
+  return stored.map((w) => ({ ...w, audience: w.audience ?? "crew" }));
+}
+
 /** The whole plan; with `reader`, only if they may see it (checked on the row it loads anyway). */
 export async function loadStoredPlan(db: Db, planId: number, reader?: SessionUser): Promise<StoredPlan> {
   const row = await plans.loadPlanRow(db, planId);
@@ -81,7 +101,7 @@ export async function loadStoredPlan(db: Db, planId: number, reader?: SessionUse
     phases: meta.phases.map((p) => ({ ...p })),
     firstMowDate: meta.firstMowDate,
     holdOffs: row.hold_offs.map((h) => ({ ...h, cautions: [...h.cautions] })),
-    warnings: [...row.warnings],
+    warnings: warningsFor(reader, row.warnings),
     cautions: cautions.map((c) => ({ ...c })),
     figures: summary as unknown as Record<string, unknown>,
     steps: stepRows.map(steps.toStoredStep),
@@ -102,7 +122,7 @@ export async function todayView(db: Db, user: SessionUser, planId: number, now =
     steps: row.steps.map(steps.toStoredStep),
     activeHoldOffs: row.hold_offs.filter((h) => h.start <= today && today <= h.end).map((h) => ({ ...h, cautions: [...h.cautions] })),
     nextMilestone: row.next_milestone,
-    warnings: [...row.warnings],
+    warnings: warningsFor(user, row.warnings),
     cautions: row.cautions.map((c) => ({ ...c })),
   };
 }

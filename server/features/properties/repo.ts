@@ -1,5 +1,5 @@
 import type { Db } from "../../db.ts";
-import type { PropertySummary } from "#shared/schemas/properties";
+import type { PropertyDetail, PropertySummary } from "#shared/schemas/properties";
 
 type Row = {
   id: number; customer_id: number; label: string; street: string; town: string; region: string;
@@ -23,7 +23,7 @@ export async function listForCustomer(db: Db, companyId: number, customerId: num
   return (await baseQuery(db, companyId).where("properties.customer_id", customerId).orderBy("properties.id")).map(toSummary);
 }
 
-export async function findInCompany(db: Db, companyId: number, propertyId: number): Promise<PropertySummary | undefined> {
-  const row = await baseQuery(db, companyId).where("properties.id", propertyId).first();
-  return row ? toSummary(row) : undefined;
+export async function findInCompany(db: Db, companyId: number, propertyId: number): Promise<PropertyDetail | undefined> {
+  const row = (await baseQuery(db, companyId).select("properties.lawn").where("properties.id", propertyId).first()) as (Row & { lawn: Record<string, unknown> }) | undefined;
+  return row ? { ...toSummary(row), lawn: row.lawn } : undefined;
 }

@@ -3,6 +3,7 @@ import request from "supertest";
 import Papa from "papaparse";
 import { IMPORT_COLUMNS } from "#shared/schemas/visit-import";
 import { createTestContext, signInCustomer, signInStaff, type TestContext } from "../../test/harness.ts";
+import { localDateAt } from "../../lib/local-date.ts";
 import { createCustomer, createIsolatedCompany } from "../follow-ups/testing/isolated-company.ts";
 
 type Agent = ReturnType<typeof request.agent>;
@@ -145,7 +146,12 @@ describe("import", () => {
     const visit = await ctx.db("service_visits").where({ id: rows[2].visitId }).first();
     expect(visit).toMatchObject({ visit_date: "2026-09-08", services: ["aeration", "overseeding"], import_key: expect.stringMatching(/^csv:/) });
     expect(visit.technician_id).toBe((await ctx.db("users").where({ email: `tech.${tag}@import.example` }).first("id")).id);
-    expect(Number((await ctx.db("plan_steps").where({ plan_id: rows[2].planId }).count<{ n: string }[]>({ n: "*" }))[0]!.n)).toBeGreaterThan(10);
+    // An imported visit's plan starts on the day of the import: no step is born missed.
+    const lawnZone = (await ctx.db("properties").where({ id: visit.property_id }).first("time_zone")).time_zone as string;
+    const stepDates = (await ctx.db("plan_steps").where({ plan_id: rows[2].planId }).pluck("date")) as string[];
+    expect(stepDates.filter((d) => d < localDateAt(lawnZone))).toEqual([]);
+    const plan = await ctx.db("care_plans").where({ id: rows[2].planId }).first("figures");
+    expect(plan.figures.meta.visitDate).toBe("2026-09-08");
   });
 
   it("shows the batch's progress", async () => {

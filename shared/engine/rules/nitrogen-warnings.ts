@@ -1,7 +1,7 @@
 import type { PlanContext } from "../context.ts";
 import { formatNumber } from "../format.ts";
 import { SINGLE_FEEDING_N } from "../tables/feeding.ts";
-import type { PlanWarning } from "../types.ts";
+import type { WarningFinding } from "../types.ts";
 import { nitrogenLbPer1000 } from "./feeding.ts";
 
 /** Rates are typed to two decimals; a hair over the limit from rounding is not a warning. */
@@ -13,7 +13,7 @@ const ROUNDING = 0.005;
  * Minnesota Extension, published) is flagged whatever the product or its
  * tick boxes say. On new seed it is a risk, elsewhere a caution.
  */
-export function singleApplicationNitrogenWarning(ctx: PlanContext): PlanWarning | null {
+export function singleApplicationNitrogenWarning(ctx: PlanContext): WarningFinding | null {
   const products = ctx.input.visit.products;
   const perProduct = products.map((p) => ({ name: p.name, n: nitrogenLbPer1000(p) }));
   const total = perProduct.reduce((sum, p) => sum + p.n, 0);
@@ -32,7 +32,7 @@ export function singleApplicationNitrogenWarning(ctx: PlanContext): PlanWarning 
   };
 }
 
-export function nitrogenWarnings(ctx: PlanContext): PlanWarning[] {
+export function nitrogenWarnings(ctx: PlanContext): WarningFinding[] {
   const warning = singleApplicationNitrogenWarning(ctx);
   return warning ? [warning] : [];
 }

@@ -5,7 +5,8 @@ import { SEEDING_SERVICES } from "../schemas/plan-input.ts";
 import { SOURCES } from "../tables/sources.ts";
 import { SPECIES_FACTS } from "../tables/species.ts";
 import { FROST_RULE } from "../tables/timing.ts";
-import type { PlanWarning } from "../types.ts";
+// The rules here find; rules/audiences.ts words each finding for the crew and, where it helps, the homeowner.
+import type { WarningFinding as PlanWarning } from "../types.ts";
 import { isHighNQuickRelease } from "./feeding.ts";
 import { isAutumnVisit } from "./seasonal.ts";
 import { assumedRatePhrase } from "./watering-notes.ts";

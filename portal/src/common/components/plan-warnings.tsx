@@ -8,7 +8,7 @@ const tone = {
   info: "border-line-strong bg-surface text-ink",
 } as const;
 
-/** Things the technician and homeowner should know about this plan as a whole (e.g. frost coming soon). */
+/** What the homeowner should know about the plan as a whole (e.g. frost coming soon); the API sends only warnings written for them. */
 export function PlanWarnings({ warnings }: { warnings: StoredPlan["warnings"] }) {
   const { t } = useTranslation();
   return (

@@ -13,6 +13,7 @@ import { RegulatedApplicationFields } from "./components/regulated-application-f
 import { SeedFields } from "./components/seed-fields.tsx";
 import { VisitBasics } from "./components/visit-basics.tsx";
 import { VisitSaved, type SavedVisit } from "./components/visit-saved.tsx";
+import { VisitWarnings } from "./components/visit-warnings.tsx";
 import type { ChosenLawn } from "./lib/chosen-lawn.ts";
 import { toFormFields } from "./lib/application-record.ts";
 import { clearDraft, loadDraft, saveDraft } from "./lib/draft.ts";
@@ -118,6 +119,7 @@ export function VisitLogRoute() {
             <VisitBasics />
             <SeedFields />
             <ProductFields />
+            <VisitWarnings propertyId={lawn?.propertyId ?? null} />
             <ConditionsFields />
             <RegulatedApplicationFields />
             <FormSection legend="Notes">

@@ -1,6 +1,7 @@
 import { Link } from "react-router-dom";
 import type { PlanHeader } from "#shared/schemas/plans";
 import { formatCalendarDay, serviceLabel } from "#shared/ui/index";
+import { PlanWarningsPanel } from "./plan-warnings-panel.tsx";
 
 /** One care plan with how far the homeowner has got: done, skipped, still to do. */
 export function PlanCard({ plan }: { plan: PlanHeader }) {
@@ -29,6 +30,7 @@ export function PlanCard({ plan }: { plan: PlanHeader }) {
         </strong>
         {skipped > 0 && <>, {skipped} skipped</>} · program version {plan.programVersion}
       </p>
+      <PlanWarningsPanel planId={plan.id} />
       <div className="flex flex-wrap gap-x-5">
         <Link to={`/plans/${plan.id}/as-homeowner`} className="inline-flex min-h-11 items-center font-semibold">
           See it as the homeowner does

@@ -78,6 +78,7 @@ export const planSchema: z.ZodType<Plan> = z.object({
   warnings: z.array(
     z.object({
       code: z.string(),
+      audience: z.enum(["crew", "homeowner"]),
       severity: z.enum(["risk", "caution", "info"]),
       message: z.string(),
       reason: z.string(),

@@ -1,10 +1,10 @@
 import { memo, useMemo } from "react";
 import type { CautionId, Plan } from "#shared/engine/index";
+import { CrewWarnings } from "../../../common/components/crew-warnings.tsx";
 import { formatDay } from "../lib/local-dates.ts";
 import { PlanFigures } from "./plan-figures.tsx";
 import { PlanHoldOffs } from "./plan-hold-offs.tsx";
 import { PlanTimeline } from "./plan-timeline.tsx";
-import { PlanWarnings } from "./plan-warnings.tsx";
 
 /**
  * Everything the engine worked out for the previewed visit. Memoised: the form
@@ -20,7 +20,7 @@ export const PlanResults = memo(function PlanResults({ plan }: { plan: Plan }) {
         {formatDay(meta.visitDate, { withYear: true })} · plan ends {formatDay(meta.planEnds)}
         {meta.firstMowDate && <> · first mow {formatDay(meta.firstMowDate)}</>} · times in {meta.timeZone}
       </p>
-      <PlanWarnings warnings={plan.warnings} />
+      <CrewWarnings warnings={plan.warnings} />
       <PlanFigures summary={plan.summary} />
       <PlanHoldOffs holdOffs={plan.holdOffs} cautionTexts={cautionTexts} />
       <PlanTimeline plan={plan} cautionTexts={cautionTexts} />

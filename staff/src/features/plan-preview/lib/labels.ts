@@ -1,4 +1,4 @@
-import { SPECIES_FACTS, type HoldOffKind, type Phase, type Provenance, type Service, type Species, type SprinklerType, type WarningSeverity } from "#shared/engine/index";
+import { SPECIES_FACTS, type HoldOffKind, type Phase, type Provenance, type Service, type Species, type SprinklerType } from "#shared/engine/index";
 import type { IrrigationKind, LawnCondition } from "./form-values.ts";
 
 /** Plain names for the engine's codes, as staff say them. */
@@ -46,12 +46,6 @@ export const HOLD_OFF_LABELS: Record<HoldOffKind, string> = {
   crabgrass_pre_emergent: "No crabgrass pre-emergent",
   high_n_quick_release: "No high-nitrogen quick-release feed",
   heavy_traffic: "Keep heavy traffic off",
-};
-
-export const SEVERITY_LABELS: Record<WarningSeverity, string> = {
-  risk: "Risk",
-  caution: "Caution",
-  info: "Note",
 };
 
 export const PROVENANCE_LABELS: Record<Provenance, string> = {

@@ -15,7 +15,7 @@ const samplePlanSchema = z.object({
   }),
   steps: z.array(z.object({ date: z.string(), kind: z.string() })),
   holdOffs: z.array(z.object({ kind: z.string(), start: z.string(), end: z.string() })),
-  warnings: z.array(z.object({ code: z.string(), severity: z.enum(["risk", "caution", "info"]), message: z.string() })),
+  warnings: z.array(z.object({ code: z.string(), audience: z.enum(["crew", "homeowner"]), severity: z.enum(["risk", "caution", "info"]), message: z.string() })),
 });
 export type SamplePlan = z.infer<typeof samplePlanSchema>;
 

@@ -88,12 +88,14 @@ function MilestoneTable({ version, current, edited }: { version: number; current
 const severityTone = { risk: "border-rust-700 bg-rust-50 text-rust-700", caution: "border-straw-800 bg-straw-50 text-straw-800", info: "border-line bg-surface" } as const;
 
 function SampleWarnings({ plan }: { plan: SamplePlan }) {
-  if (plan.warnings.length === 0) return <p className="text-ink-soft">No warnings for the sample job.</p>;
+  // The crew's wording: homeowner versions of the same findings would only repeat them here.
+  const warnings = plan.warnings.filter((w) => w.audience === "crew");
+  if (warnings.length === 0) return <p className="text-ink-soft">No warnings for the sample job.</p>;
   return (
     <div>
       <h3 className="mb-2 text-lg">Warnings on the sample plan</h3>
       <ul className="flex flex-col gap-2">
-        {plan.warnings.map((w) => (
+        {warnings.map((w) => (
           <li key={w.code} className={`rounded-lg border-l-4 p-3 ${severityTone[w.severity]}`}>
             {w.message}
           </li>

@@ -1,9 +1,9 @@
 import { queryOptions, skipToken, useQuery } from "@tanstack/react-query";
-import { propertyResponseSchema, type PropertySummary } from "#shared/schemas/properties";
+import { propertyResponseSchema, type PropertyDetail } from "#shared/schemas/properties";
 import { apiFetch } from "#shared/ui/index";
 
-/** One lawn with its size and time zone, to fill in the area on the visit. */
-export async function getProperty(id: number, signal?: AbortSignal): Promise<PropertySummary> {
+/** One lawn with its size, time zone and lawn facts: to fill in the area and check the visit against the lawn. */
+export async function getProperty(id: number, signal?: AbortSignal): Promise<PropertyDetail> {
   const { property } = await apiFetch(`/api/properties/${id}`, { schema: propertyResponseSchema, signal });
   return property;
 }
