@@ -125,10 +125,10 @@ describe("keywords from the customer's phone (through the fake's signed inbound 
     expect(again.replies).toEqual(["Cobblefield Turf: There is no watering left to mark for today."]);
   });
 
-  it("STOP from a number we don't know still gets a confirmation; other texts are kept as unmatched (two-way.test.ts)", async () => {
+  it("STOP from a number we don't know still gets a confirmation; other texts get the office number from the demo company and are kept as unmatched (two-way.test.ts)", async () => {
     expect((await ctx.fakes.sms.simulateInbound({ from: "+13315550198", body: "UNSUBSCRIBE" })).replies[0]).toMatch(/^Cobblefield Turf: You're unsubscribed/);
     expect((await ctx.fakes.sms.simulateInbound({ from: "+13315550198", body: "what time do I water?" })).replies).toEqual([
-      "Cobblefield Turf: Hello! This number isn't on file with Cobblefield Turf Care, so we couldn't pass your text on. Please contact our office directly.",
+      "Cobblefield Turf: Hello! This number isn't on file with Cobblefield Turf Care, so we couldn't pass your text on. Please call or text us at (330) 555-0100.",
     ]);
   });
 });
