@@ -4,7 +4,8 @@ import { generatePlan } from "./generate.ts";
 import { recomputePlan } from "./recompute.ts";
 import { valid, withChanges } from "./testing/fixtures.ts";
 
-// The fixture's visit is 2026-09-10: mow-down cuts on 09-02 and 09-09, hazards flagged and debris cleared on 09-09.
+// The fixture's visit is 2026-09-10 (with core aeration): mow-down cuts on 09-02 and 09-09, hazards flagged,
+// debris cleared and a "water the day before if dry" note on 09-09.
 describe("no step is born missed", () => {
   it("a plan made on the visit day has no 'before the visit' steps and nothing dated earlier", () => {
     const plan = generatePlan(valid(withChanges({ options: { today: "2026-09-10" } })));
@@ -25,10 +26,12 @@ describe("no step is born missed", () => {
 
   it("a visit booked ahead keeps the prep steps still to come", () => {
     const plan = generatePlan(valid(withChanges({ options: { today: "2026-09-05" } })));
-    // The first mow-down cut (09-02) is already past; the last cut and the day-before chores are not.
+    // The first mow-down cut (09-02) is already past; the last cut and the day-before chores
+    // (including aeration's "water the day before if dry" note) are not.
     expect(plan.prepSteps.map((s) => `${s.kind} ${s.date}`).sort()).toEqual([
       "clear_debris 2026-09-09",
       "flag_hazards 2026-09-09",
+      "note 2026-09-09",
       "prep_mow 2026-09-09",
     ]);
   });
