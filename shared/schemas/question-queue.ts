@@ -65,13 +65,16 @@ export type AssignQuestionResponse = z.infer<typeof assignQuestionResponseSchema
 export const answeredQuestionsQuerySchema = z.object({
   days: z.coerce.number().int().min(1).max(30).default(7),
 });
-export const answeredQuestionSchema = z.object({
+/** A homeowner's question as staff lists show it: who asked, about which lawn, and when. */
+export const questionSummarySchema = z.object({
   messageId: z.number().int(),
   planId: z.number().int(),
   customerName: z.string(),
   street: z.string(),
   text: z.string(),
   askedAt: z.string(),
+});
+export const answeredQuestionSchema = questionSummarySchema.extend({
   /** When the first staff answer followed the question. */
   answeredAt: z.string(),
   answeredByName: z.string().nullable(),

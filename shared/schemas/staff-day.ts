@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { FOLLOW_UP_REASONS, FOLLOW_UP_STATUSES } from "./follow-ups.ts";
+import { questionSummarySchema } from "./question-queue.ts";
 
 /**
  * GET /api/staff/day: a technician's working day on the staff home. Technicians see their own
@@ -35,13 +36,7 @@ export const staffDayVisitSchema = z.object({
 });
 export type StaffDayVisit = z.infer<typeof staffDayVisitSchema>;
 
-export const staffDayQuestionSchema = z.object({
-  messageId: z.number().int(),
-  planId: z.number().int(),
-  customerName: z.string(),
-  street: z.string(),
-  text: z.string(),
-  askedAt: z.string(),
+export const staffDayQuestionSchema = questionSummarySchema.extend({
   /** Waiting longer than the company's answer target. */
   overdue: z.boolean(),
   assignedToName: z.string().nullable(),

@@ -1,6 +1,6 @@
 import type { QueryClient } from "@tanstack/react-query";
 import type { LoaderFunctionArgs } from "react-router-dom";
-import { planQueryOptions } from "./api/get-plan.ts";
+import { planQueryOptions } from "../../common/api/get-plan.ts";
 import { threadQueryOptions } from "./api/get-thread.ts";
 
 /**

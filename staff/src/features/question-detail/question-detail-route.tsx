@@ -1,7 +1,7 @@
 import { useState } from "react";
 import { Link, useParams } from "react-router-dom";
 import { ErrorState, LoadingState, NotFoundPage, Notice, Page } from "#shared/ui/index";
-import { usePlan } from "./api/get-plan.ts";
+import { usePlan } from "../../common/api/get-plan.ts";
 import { useThread } from "./api/get-thread.ts";
 import { AnswerForm } from "./components/answer-form.tsx";
 import { ConversationMessages } from "./components/earlier-conversation.tsx";

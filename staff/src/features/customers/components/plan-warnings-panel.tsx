@@ -1,7 +1,7 @@
 import { useState } from "react";
 import { ErrorState, LoadingState } from "#shared/ui/index";
 import { CrewWarnings } from "../../../common/components/crew-warnings.tsx";
-import { usePlan } from "../api/get-plan.ts";
+import { usePlan } from "../../../common/api/get-plan.ts";
 
 /** The plan's warnings, loaded only when opened: most visits to a customer's page don't need them. */
 export function PlanWarningsPanel({ planId }: { planId: number }) {

@@ -7,8 +7,8 @@ import {
   Button, CheckboxField, Dialog, Notice, SelectField, TextAreaField, TextField, applyServerErrors, localToday, useDebouncedValue, useSignedInUser,
 } from "#shared/ui/index";
 import { HomeownerVisitFields } from "../../../common/components/homeowner-visit-fields.tsx";
-import { useCreateFollowUp } from "../api/create-follow-up.ts";
-import { useCustomerSearch } from "../api/search-customers.ts";
+import { useCreateFollowUp } from "../../../common/api/create-follow-up.ts";
+import { useCustomerSearch } from "../../../common/api/search-customers.ts";
 import { emptyNewFollowUp, newFollowUpFields, toNewFollowUpBody, type NewFollowUpValues } from "../lib/new-follow-up-form.ts";
 
 export interface AddFollowUpDialogProps {

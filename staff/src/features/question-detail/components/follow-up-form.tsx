@@ -3,7 +3,7 @@ import { useForm } from "react-hook-form";
 import { FOLLOW_UP_REASONS, followUpReasonLabels, type FollowUp, type FollowUpReason } from "#shared/schemas/follow-ups";
 import { Button, CheckboxField, Notice, SelectField, TextAreaField, TextField, applyServerErrors, localToday, useSignedInUser } from "#shared/ui/index";
 import { HomeownerVisitFields } from "../../../common/components/homeowner-visit-fields.tsx";
-import { useCreateFollowUp } from "../api/create-follow-up.ts";
+import { useCreateFollowUp } from "../../../common/api/create-follow-up.ts";
 import { useTeam } from "../api/get-team.ts";
 import { emptyFollowUpForm, followUpFormFields, toFollowUpBody, type FollowUpContext, type FollowUpFormValues } from "../lib/follow-up-form.ts";
 

@@ -1,6 +1,6 @@
 import { useState } from "react";
 import { Button, FieldError, TextField, useDebouncedValue } from "#shared/ui/index";
-import { useCustomerSearch } from "../api/search-customers.ts";
+import { useCustomerSearch } from "../../../common/api/search-customers.ts";
 import type { ChosenLawn } from "../lib/chosen-lawn.ts";
 import { fieldId } from "../lib/form-values.ts";
 

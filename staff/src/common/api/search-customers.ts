@@ -2,7 +2,7 @@ import { keepPreviousData, queryOptions, skipToken, useQuery } from "@tanstack/r
 import { customerSearchResponseSchema, type CustomerSummary } from "#shared/schemas/customers";
 import { apiFetch } from "#shared/ui/index";
 
-/** Customers whose name, street, phone, e-mail or number matches, with their lawns. */
+/** For pickers (visit form, new follow-up): customers whose name, street, phone, e-mail or number matches, with their lawns. */
 export async function searchCustomers(q: string, signal?: AbortSignal): Promise<CustomerSummary[]> {
   const params = new URLSearchParams({ q, limit: "10" });
   const { customers } = await apiFetch(`/api/customers?${params}`, { schema: customerSearchResponseSchema, signal });
