@@ -7,27 +7,14 @@
  * several hosts behind the domain's MX records) all work.
  */
 import "dotenv/config";
-import { loadConfig, ConfigError } from "./config.ts";
+import { configOrExit, processLog } from "./lib/process-start.ts";
 import { createDb } from "./db.ts";
 import { createMessenger } from "./messaging/create-messenger.ts";
 import { photoStorageFromConfig } from "./storage/index.ts";
 import { startInboundSmtp } from "./features/email-replies/listener.ts";
 
-function log(message: string, err?: unknown) {
-  const detail = err instanceof Error ? `\n${err.stack}` : err ? ` ${String(err)}` : "";
-  process.stderr.write(`[inbound-email] ${new Date().toISOString()} ${message}${detail}\n`);
-}
-
-let config;
-try {
-  config = loadConfig();
-} catch (err) {
-  if (err instanceof ConfigError) {
-    log(err.message);
-    process.exit(1);
-  }
-  throw err;
-}
+const log = processLog("inbound-email");
+const config = configOrExit(log);
 
 const db = createDb(config.DATABASE_URL, { min: 0, max: 5 });
 const tls =

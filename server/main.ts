@@ -5,26 +5,13 @@
  */
 import "dotenv/config";
 import { createServer } from "node:http";
-import { loadConfig, ConfigError } from "./config.ts";
+import { configOrExit, processLog } from "./lib/process-start.ts";
 import { createDb } from "./db.ts";
 import { createApp, type WebMode } from "./app.ts";
 import { createMessenger } from "./messaging/create-messenger.ts";
 
-function log(message: string, err?: unknown) {
-  const detail = err instanceof Error ? `\n${err.stack}` : err ? ` ${String(err)}` : "";
-  process.stderr.write(`[server] ${new Date().toISOString()} ${message}${detail}\n`);
-}
-
-let config;
-try {
-  config = loadConfig();
-} catch (err) {
-  if (err instanceof ConfigError) {
-    log(err.message);
-    process.exit(1);
-  }
-  throw err;
-}
+const log = processLog("server");
+const config = configOrExit(log);
 
 const db = createDb(config.DATABASE_URL);
 const messenger = createMessenger(config);

@@ -11,7 +11,7 @@
  */
 import "dotenv/config";
 import PgBoss from "pg-boss";
-import { loadConfig, ConfigError } from "./config.ts";
+import { configOrExit, processLog } from "./lib/process-start.ts";
 import { createDb } from "./db.ts";
 import { createMessenger } from "./messaging/create-messenger.ts";
 import { createSmsSender } from "./adapters/sms.ts";
@@ -21,20 +21,9 @@ import { refreshActivePlans } from "./features/reminders/reconcile.ts";
 import { loadReminderSettings } from "./features/reminders/settings.ts";
 import { createSmsLookup } from "./features/reminders/sms-lookup.ts";
 
-function log(message: string, err?: unknown) {
-  const detail = err instanceof Error ? `\n${err.stack}` : err ? ` ${String(err)}` : "";
-  process.stderr.write(`[worker] ${new Date().toISOString()} ${message}${detail}\n`);
-}
-
-let config;
-let settings;
-try {
-  config = loadConfig();
-  settings = loadReminderSettings();
-} catch (err) {
-  log(err instanceof ConfigError ? err.message : `Configuration is not valid: ${String(err)}`);
-  process.exit(1);
-}
+const log = processLog("worker");
+const config = configOrExit(log);
+const settings = configOrExit(log, loadReminderSettings);
 
 const db = createDb(config.DATABASE_URL, { min: 0, max: Math.min(50, settings.REMINDER_CONCURRENCY + 5) });
 
