@@ -12,6 +12,8 @@ const managerScreens = [
   { path: "/staff/team", heading: "Team" },
   { path: "/staff/import", heading: "Import visits" },
   { path: "/staff/audit", heading: "Audit log" },
+  { path: "/staff/unmatched", heading: "Unmatched messages" },
+  { path: "/staff/company", heading: "Company profile" },
 ];
 
 type PlanHeader = { id: number; propertyId: number; visitDate: string; services: string[] };
@@ -98,7 +100,7 @@ test("technicians don't see manager screens and get a plain answer if they open 
   if (await menu.isVisible()) await menu.click();
   const nav = page.getByRole("navigation", { name: "Main" });
   await expect(nav.getByRole("link", { name: "Home" })).toBeVisible();
-  for (const label of ["Follow-ups", "Callback report", "Programs", "Team", "Import", "Audit log"]) {
+  for (const label of ["Follow-ups", "Unmatched messages", "Callback report", "Programs", "Team", "Company profile", "Import", "Audit log"]) {
     await expect(nav.getByRole("link", { name: label, exact: true })).toHaveCount(0);
   }
   await page.goto("/staff/reports/callbacks");
