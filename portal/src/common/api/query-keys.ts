@@ -16,10 +16,11 @@ export const portalKeys = {
 
 /**
  * Answers the portal keeps on the device for offline reading (plus "me", to get past the sign-in check).
- * The company (name, phone, logo address) is kept so the header still says who to call in the
- * garden. The unread count is not: a saved count would still announce answers read since.
+ * Not the company profile: the signed-out sign-in page reads it too, so it would be saved again right
+ * after a session ends wipes the device (the session still carries the company's name). Not the
+ * unread count either: a saved count would still announce answers read since.
  */
-export const offlineReadableRoots = new Set(["plans", "threads", "session", "company"]);
+export const offlineReadableRoots = new Set(["plans", "threads", "session"]);
 
 /** A week covers the life of a paused phone; older plans would mislead more than help. */
 export const offlineMaxAgeMs = 7 * 24 * 60 * 60 * 1000;
