@@ -2,6 +2,8 @@
  * Builds the real app against the test database and in-process fakes, for supertest.
  * No database mocks: every API test talks to PostgreSQL.
  */
+import { createServer } from "node:http";
+import type { AddressInfo } from "node:net";
 import { inject } from "vitest";
 import request from "supertest";
 import { createApp, type BuiltApp } from "../app.ts";
@@ -120,4 +122,16 @@ export async function googleRoundTrip(agent: ReturnType<typeof request.agent>, c
   const callback = new URL(chosen.headers.get("location")!);
   const done = await agent.get(`${callback.pathname}${callback.search}`);
   return { status: done.status, location: done.headers.location as string | undefined };
+}
+
+/**
+ * A loopback port free right now. Webhook tests need the app listening on its PUBLIC_URL, because the
+ * SMS fake signs the URL it calls and the app checks the signature against PUBLIC_URL.
+ */
+export async function freePort(): Promise<number> {
+  const probe = createServer();
+  await new Promise<void>((r) => probe.listen(0, "127.0.0.1", r));
+  const { port } = probe.address() as AddressInfo;
+  await new Promise((r) => probe.close(r));
+  return port;
 }

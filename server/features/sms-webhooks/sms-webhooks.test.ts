@@ -1,10 +1,9 @@
 import { createServer, type Server } from "node:http";
-import type { AddressInfo } from "node:net";
 import twilio from "twilio";
 import request from "supertest";
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from "vitest";
 import { addDays } from "#shared/engine/index";
-import { createTestContext, type TestContext } from "../../test/harness.ts";
+import { createTestContext, freePort, type TestContext } from "../../test/harness.ts";
 import { localDateAt } from "../../lib/local-date.ts";
 import { reconcilePlanReminders } from "../reminders/reconcile.ts";
 import { createCustomerWithPlan, daytimeZone, eventually, fastSettings, insertDueReminder, testDispatcher, type FixtureCustomer } from "../reminders/testing/fixtures.ts";
@@ -12,15 +11,6 @@ import { createCustomerWithPlan, daytimeZone, eventually, fastSettings, insertDu
 let ctx: TestContext;
 let server: Server;
 let publicUrl: string;
-
-/** The fake signs for the URL it calls, and we verify against PUBLIC_URL: so the app must really listen there. */
-async function freePort(): Promise<number> {
-  const probe = createServer();
-  await new Promise<void>((r) => probe.listen(0, "127.0.0.1", r));
-  const { port } = probe.address() as AddressInfo;
-  await new Promise((r) => probe.close(r));
-  return port;
-}
 
 beforeAll(async () => {
   const port = await freePort();

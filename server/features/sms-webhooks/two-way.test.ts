@@ -4,7 +4,7 @@ import sharp from "sharp";
 import twilio from "twilio";
 import request from "supertest";
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from "vitest";
-import { createTestContext, signInStaff, type TestContext } from "../../test/harness.ts";
+import { createTestContext, freePort, signInStaff, type TestContext } from "../../test/harness.ts";
 import { localDateAt } from "../../lib/local-date.ts";
 import { photoStorageFromConfig } from "../../storage/index.ts";
 import { createCustomerWithPlan, daytimeZone, freshPhone, type FixtureCustomer } from "../reminders/testing/fixtures.ts";
@@ -14,14 +14,6 @@ let ctx: TestContext;
 let server: Server;
 let publicUrl: string;
 let inboundUrl: string;
-
-async function freePort(): Promise<number> {
-  const probe = createServer();
-  await new Promise<void>((r) => probe.listen(0, "127.0.0.1", r));
-  const { port } = probe.address() as AddressInfo;
-  await new Promise((r) => probe.close(r));
-  return port;
-}
 
 beforeAll(async () => {
   const port = await freePort();

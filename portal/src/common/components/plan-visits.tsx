@@ -3,7 +3,7 @@ import { usePlanVisits } from "../api/get-plan-visits.ts";
 import { formatLongDate } from "../lib/dates.ts";
 import { QueryFallback } from "./query-fallback.tsx";
 import { Section } from "./section.tsx";
-import { BookedVisitCard } from "./visit-card.tsx";
+import { BookedVisitList, upcomingVisits } from "./visit-card.tsx";
 
 /** The plan's visits: those booked, on their dates, and the history of what was done. */
 export function PlanVisits({ planId, today }: { planId: number; today: string }) {
@@ -17,20 +17,12 @@ export function PlanVisits({ planId, today }: { planId: number; today: string })
       </Section>
     );
   }
-  const upcoming = visits.filter((v) => v.status === "scheduled" && v.scheduledFor !== null && v.scheduledFor >= today);
+  const upcoming = upcomingVisits(visits, today);
   const past = visits.filter((v) => v.status !== "scheduled").reverse();
   return (
     <Section title={t("visits.heading")}>
       {upcoming.length === 0 && past.length === 0 && <p className="text-ink-soft">{t("visits.none")}</p>}
-      {upcoming.length > 0 && (
-        <ul className="space-y-4">
-          {upcoming.map((visit) => (
-            <li key={visit.id}>
-              <BookedVisitCard planId={planId} visit={visit} />
-            </li>
-          ))}
-        </ul>
-      )}
+      {upcoming.length > 0 && <BookedVisitList planId={planId} visits={upcoming} />}
       {past.length > 0 && (
         <>
           <h3 className="mb-2 mt-6 text-xl text-pine-900">{t("visits.pastHeading")}</h3>

@@ -2,7 +2,7 @@ import { useTranslation } from "react-i18next";
 import { Notice } from "#shared/ui/index";
 import { usePlanVisits } from "../api/get-plan-visits.ts";
 import { Section } from "./section.tsx";
-import { BookedVisitCard } from "./visit-card.tsx";
+import { BookedVisitList, upcomingVisits } from "./visit-card.tsx";
 
 /**
  * Today's note of booked visits from today on. It adds to Today rather than leading it, so
@@ -14,17 +14,11 @@ export function UpcomingVisits({ planId, today }: { planId: number; today: strin
   if (query.isError && !query.data) {
     return <Notice tone="warning" className="mt-6">{t("visits.loadError")}</Notice>;
   }
-  const upcoming = (query.data ?? []).filter((v) => v.status === "scheduled" && v.scheduledFor !== null && v.scheduledFor >= today);
+  const upcoming = upcomingVisits(query.data ?? [], today);
   if (upcoming.length === 0) return null;
   return (
     <Section title={t("visits.upcomingHeading")}>
-      <ul className="space-y-4">
-        {upcoming.map((visit) => (
-          <li key={visit.id}>
-            <BookedVisitCard planId={planId} visit={visit} />
-          </li>
-        ))}
-      </ul>
+      <BookedVisitList planId={planId} visits={upcoming} />
     </Section>
   );
 }

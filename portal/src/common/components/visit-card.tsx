@@ -119,3 +119,19 @@ function AnotherDayForm({ planId, visitId, onCancel }: { planId: number; visitId
     </form>
   );
 }
+
+/** Visits still to come: booked for today or later. */
+export const upcomingVisits = (visits: readonly PlanVisit[], today: string) =>
+  visits.filter((v) => v.status === "scheduled" && v.scheduledFor !== null && v.scheduledFor >= today);
+
+export function BookedVisitList({ planId, visits }: { planId: number; visits: readonly PlanVisit[] }) {
+  return (
+    <ul className="space-y-4">
+      {visits.map((visit) => (
+        <li key={visit.id}>
+          <BookedVisitCard planId={planId} visit={visit} />
+        </li>
+      ))}
+    </ul>
+  );
+}
