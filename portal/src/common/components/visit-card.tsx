@@ -30,7 +30,7 @@ export function VisitFacts({ visit }: { visit: PlanVisit }) {
 }
 
 /** A booked visit with what to do before it, and the homeowner's answer: it works, or another day please. */
-export function BookedVisitCard({ planId, visit }: { planId: number; visit: PlanVisit }) {
+function BookedVisitCard({ planId, visit }: { planId: number; visit: PlanVisit }) {
   const { t } = useTranslation();
   return (
     <article className="rounded-xl border-2 border-pine-700 bg-surface p-4" aria-label={t("visits.upcomingHeading")}>
