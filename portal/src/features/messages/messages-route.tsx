@@ -64,7 +64,8 @@ function PlanThread({ planId }: { planId: number }) {
   const { t } = useTranslation();
   const threadQuery = useThread(planId);
   useFetchNewAnswers(planId);
-  if (!threadQuery.data) {
+  const thread = useNewMarksKept(threadQuery.data);
+  if (!thread) {
     if (isNotFound(threadQuery.error)) {
       return <ErrorState title={t("messages.loadError")} error={threadQuery.error} message={t("messages.notAvailable")} />;
     }
@@ -73,7 +74,7 @@ function PlanThread({ planId }: { planId: number }) {
   return (
     <>
       <OfflineNotice query={threadQuery} />
-      <Thread thread={threadQuery.data} />
+      <Thread thread={thread} />
     </>
   );
 }
@@ -84,11 +85,33 @@ function PlanThread({ planId }: { planId: number }) {
  */
 function useFetchNewAnswers(planId: number) {
   const queryClient = useQueryClient();
-  const { data } = useUnread();
+  const { data, dataUpdatedAt: countedAt } = useUnread();
   const unread = data?.plans.find((p) => p.planId === planId)?.unread ?? 0;
   useEffect(() => {
-    if (unread > 0) void queryClient.invalidateQueries({ queryKey: portalKeys.thread(planId) });
-  }, [queryClient, planId, unread]);
+    // A count older than the thread on screen, or a thread fetch already on its way, has nothing to
+    // add; fetching again then would only replace the answer that shows what is new with one that doesn't.
+    const thread = queryClient.getQueryState(portalKeys.thread(planId));
+    if (unread === 0 || thread?.fetchStatus === "fetching" || (thread?.dataUpdatedAt ?? 0) > countedAt) return;
+    void queryClient.invalidateQueries({ queryKey: portalKeys.thread(planId) }, { cancelRefetch: false });
+  }, [queryClient, planId, unread, countedAt]);
+}
+
+/**
+ * Every fetch marks the thread read, so a refetch (the minute's poll, new answers, coming back to
+ * the app) answers "not new" for what this visit showed as new. Keep those marks while the page is
+ * open: the homeowner should not see "New" vanish before they have read it.
+ */
+function useNewMarksKept(thread: ThreadResponse | undefined): ThreadResponse | undefined {
+  const [marked, setMarked] = useState<ReadonlySet<number>>(() => new Set(thread?.messages.filter((m) => m.unread).map((m) => m.id)));
+  const [seen, setSeen] = useState(thread);
+  if (thread !== seen) {
+    // React's pattern for state derived from a changing prop: adjust it while rendering.
+    setSeen(thread);
+    const fresh = thread?.messages.filter((m) => m.unread && !marked.has(m.id)) ?? [];
+    if (fresh.length > 0) setMarked(new Set([...marked, ...fresh.map((m) => m.id)]));
+  }
+  if (!thread) return thread;
+  return { ...thread, messages: thread.messages.map((m) => (!m.unread && marked.has(m.id) ? { ...m, unread: true } : m)) };
 }
 
 function Thread({ thread }: { thread: ThreadResponse }) {
