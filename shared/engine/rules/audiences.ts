@@ -24,7 +24,7 @@ const HOMEOWNER: Partial<Record<string, (ctx: PlanContext, finding: WarningFindi
     message: "If any spots are still bare about a month from now, send us a photo so we can take a look.",
     reason: "A light seeding can leave a few thin spots that a touch-up fills in.",
   }),
-  // Only the ryegrass-for-winter-colour case (an "info" finding) tells the homeowner what to expect.
+  // Only the ryegrass-for-winter-color case (an "info" finding) tells the homeowner what to expect.
   warm_season_autumn_overseeding: (_ctx, finding) =>
     finding.severity === "info"
       ? {

@@ -85,9 +85,9 @@ export function planWarnings(ctx: PlanContext): PlanWarning[] {
       code: "warm_season_autumn_overseeding",
       severity: ryegrassOnly ? "info" : "caution",
       message: ryegrassOnly
-        ? "Ryegrass sown into a warm-season lawn in autumn gives winter colour only; it will not thicken the lawn itself."
-        : "Overseeding a warm-season lawn in autumn is not advised: these grasses spread by runners and go dormant in the cold.",
-      reason: "Warm-season lawns thicken by stolons and rhizomes during summer growth, not from autumn seed.",
+        ? "Ryegrass sown into a warm-season lawn in the fall gives winter color only; it will not thicken the lawn itself."
+        : "Overseeding a warm-season lawn in the fall is not advised: these grasses spread by runners and go dormant in the cold.",
+      reason: "Warm-season lawns thicken by stolons and rhizomes during summer growth, not from fall seed.",
       source: SOURCES.tradePractice,
       provenance: "common practice",
     });
@@ -125,7 +125,7 @@ export function planWarnings(ctx: PlanContext): PlanWarning[] {
       code: "high_n_quick_release_on_seed",
       severity: "risk",
       message: "A high-nitrogen quick-release product was applied on new seed.",
-      reason: "Quick-release nitrogen can burn seedlings and favour top growth over roots.",
+      reason: "Quick-release nitrogen can burn seedlings and favor top growth over roots.",
       source: SOURCES.tradePractice,
       provenance: "common practice",
     });

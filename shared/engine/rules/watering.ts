@@ -261,7 +261,7 @@ export function wateringSteps(ctx: PlanContext): PlanStep[] {
     const feeding = ctx.services.has("fertiliser_only") || ctx.services.has("starter_fertiliser");
     const amount = ctx.input.property.irrigation.kind === "none" ? "" : `, ${maturing.minutes} minutes ${wherePhrase(ctx)}`;
     push(0, () =>
-      deepStep(ctx, 0, maturing, deepStart, `${feeding ? "Water the fertiliser in today" : "Water the lawn deeply today"}${amount}`),
+      deepStep(ctx, 0, maturing, deepStart, `${feeding ? "Water the fertilizer in today" : "Water the lawn deeply today"}${amount}`),
     );
     for (const day of deepWateringDays(3, Math.min(timeline.establishmentEnd, stopDay), program.maturingWateringsPerWeek)) {
       push(day, () => deepStep(ctx, day, maturing, deepStart));

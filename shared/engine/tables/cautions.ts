@@ -31,7 +31,7 @@ const tradeCaution = (id: CautionId, text: string): Caution => ({
 export const CAUTIONS: Readonly<Record<CautionId, Caution>> = {
   label_is_law: tradeCaution(
     "label_is_law",
-    "Read the product label and do what it says. For fertiliser and weed control, the label is the law.",
+    "Read the product label and do what it says. For fertilizer and weed control, the label is the law.",
   ),
   children_pets: tradeCaution(
     "children_pets",

@@ -3,7 +3,7 @@ import { parsePlanInput } from "../schemas/parse.ts";
 
 /**
  * A typical autumn job: core aeration and overseeding of a thin tall-fescue
- * lawn in New Jersey, starter fertiliser applied, in-ground sprinklers.
+ * lawn in New Jersey, starter fertilizer applied, in-ground sprinklers.
  * Tests change one thing at a time from here.
  */
 export function overseedingVisit(): PlanInputRaw {

@@ -7,7 +7,7 @@ export function CostBreakdown({ report }: { report: CallbackReport }) {
   const rows = [
     { item: "Callbacks", value: formatCount(cost.callbacks) },
     { item: "Labour hours", value: formatHours(cost.labourHours) },
-    { item: `Labour at ${formatMoney(labourRatePerHour)} an hour`, value: formatMoney(cost.labourCost) },
+    { item: `Labor at ${formatMoney(labourRatePerHour)} an hour`, value: formatMoney(cost.labourCost) },
     { item: "Materials", value: formatMoney(cost.materialsCost) },
     { item: "Total", value: formatMoney(cost.totalCost) },
     { item: "Average per callback", value: cost.averagePerCallback === null ? "—" : formatMoney(cost.averagePerCallback) },

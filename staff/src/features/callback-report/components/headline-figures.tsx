@@ -18,7 +18,7 @@ export function HeadlineFigures({ report }: { report: CallbackReport }) {
         testId="headline-callback-cost"
         label="Cost of callbacks"
         value={formatMoney(cost.totalCost)}
-        detail={`${formatMoney(cost.labourCost)} labour, ${formatMoney(cost.materialsCost)} materials`}
+        detail={`${formatMoney(cost.labourCost)} labor, ${formatMoney(cost.materialsCost)} materials`}
       />
       <Figure
         testId="headline-answer-time"

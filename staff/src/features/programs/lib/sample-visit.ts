@@ -38,4 +38,4 @@ export function sampleVisitInput(program: ProgramSettingsInput): PlanInputRaw {
   } as PlanInputRaw;
 }
 
-export const sampleDescription = "Core aeration and overseeding of a thin 6,000 ft² tall-fescue lawn on 10 September, in-ground sprinklers, starter fertiliser.";
+export const sampleDescription = "Core aeration and overseeding of a thin 6,000 ft² tall-fescue lawn on September 10, in-ground sprinklers, starter fertilizer.";
