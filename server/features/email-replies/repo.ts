@@ -41,25 +41,6 @@ export async function emailAlreadyFiled(db: Db, externalId: string): Promise<boo
   return Boolean(row);
 }
 
-/**
- * Files the reply as a question from the homeowner; returns null when the same e-mail (same
- * Message-ID) was filed meanwhile by another delivery, which the unique index decides.
- */
-export async function insertEmailQuestion(
-  trx: Knex.Transaction,
-  reply: { conversationId: number; authorUserId: number; text: string; externalId: string },
-): Promise<number | null> {
-  const result = await trx.raw<{ rows: { id: string }[] }>(
-    `INSERT INTO messages (conversation_id, kind, author_user_id, text, source, external_id)
-     VALUES (?, 'question', ?, ?, 'email', ?)
-     ON CONFLICT (source, external_id) WHERE external_id IS NOT NULL DO NOTHING
-     RETURNING id`,
-    [reply.conversationId, reply.authorUserId, reply.text, reply.externalId],
-  );
-  const id = result.rows[0]?.id;
-  return id === undefined ? null : Number(id);
-}
-
 /** A staff-only note written by the system (no author) in the same thread. */
 export async function insertSystemNote(trx: Knex.Transaction, conversationId: number, text: string): Promise<void> {
   await trx("messages").insert({ conversation_id: conversationId, kind: "note", author_user_id: null, text, source: "email" });

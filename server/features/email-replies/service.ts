@@ -8,7 +8,7 @@ import { processPhoto, type ProcessedPhoto } from "../photos/image-pipeline.ts";
 import { deletePhotoFiles, writePhotoFiles } from "../photos/photo-files.ts";
 import { insertPhotoRows } from "../photos/repo.ts";
 import { replyAddress, tokenFromAddress } from "../questions/reply-address.ts";
-import { companyName } from "../questions/repo.ts";
+import { companyName, insertMessage, isUniqueViolation } from "../questions/repo.ts";
 import type { InboundAttachment, InboundEmail } from "./parse.ts";
 import { refusal, refusalLines, refusalNotice, refusalOfPipelineError, type Refusal } from "./refusal-notice.ts";
 import * as repo from "./repo.ts";
@@ -115,16 +115,17 @@ export async function fileInboundEmail(deps: EmailReplyDeps, email: InboundEmail
 
   const { accepted, refused } = await processAttachments(email.attachments.filter((a) => !isDecoration(a)), deps.log);
   const files = await writePhotoFiles(deps.storage, accepted);
-  let messageId: number | null;
+  let messageId: number;
   try {
     messageId = await deps.db.transaction(async (trx) => {
-      const id = await repo.insertEmailQuestion(trx, {
+      const id = await insertMessage(trx, {
         conversationId: target.conversationId,
+        kind: "question",
         authorUserId: target.customerUserId,
         text: bodyOf(email),
+        source: "email",
         externalId: email.externalId,
       });
-      if (id === null) return null;
       await insertPhotoRows(trx, id, files);
       if (refused.length > 0) {
         const told = email.automated ? "" : " (they were told by e-mail)";
@@ -134,11 +135,9 @@ export async function fileInboundEmail(deps: EmailReplyDeps, email: InboundEmail
     });
   } catch (err) {
     await deletePhotoFiles(deps.storage, files);
+    // Another delivery of the same e-mail (same Message-ID) was filed meanwhile.
+    if (isUniqueViolation(err)) return { kind: "duplicate" };
     throw err;
-  }
-  if (messageId === null) {
-    await deletePhotoFiles(deps.storage, files);
-    return { kind: "duplicate" };
   }
   if (refused.length > 0) await sendRefusalNotice(deps, email, target, token, refused);
   return { kind: "filed", messageId, photos: files.length, refused };

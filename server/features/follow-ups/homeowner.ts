@@ -2,7 +2,7 @@ import type { AnotherDay, PlanVisit, Weekday } from "#shared/schemas/follow-ups"
 import type { Db } from "../../db.ts";
 import type { SessionUser } from "../../auth/session-user.ts";
 import { HttpError, notFound } from "../../http/errors.ts";
-import { ensureConversation } from "../questions/repo.ts";
+import { ensureConversation, insertMessage } from "../questions/repo.ts";
 import { newestActivePlan } from "./repo.ts";
 
 /*
@@ -124,13 +124,12 @@ export async function askForAnotherDay(db: Db, user: SessionUser, id: number, re
   await db.transaction(async (trx) => {
     await trx("follow_up_visits").where({ id }).update({ customer_response: "another_day", customer_responded_at: trx.fn.now(), updated_at: trx.fn.now() });
     const conversation = await ensureConversation(trx, planId);
-    await trx("messages").insert({
-      conversation_id: conversation.id,
+    await insertMessage(trx, {
+      conversationId: conversation.id,
       kind: "question",
-      author_user_id: user.id,
+      authorUserId: user.id,
       text: anotherDayText({ scheduledFor: row.scheduled_for, arrivalStart: row.arrival_start, arrivalEnd: row.arrival_end }, request),
-      source: "portal",
-      follow_up_id: id,
+      followUpId: id,
     });
   });
   return { ...toVisit(row), customerResponse: "another_day" };

@@ -65,15 +65,34 @@ export async function findMessage(db: Db, messageId: number, side: Side): Promis
   return row ? toRow(row) : undefined;
 }
 
-export async function insertMessage(
-  trx: Knex.Transaction,
-  message: { conversationId: number; kind: MessageKind; authorUserId: number | null; text: string },
-): Promise<number> {
+export type NewMessage = {
+  conversationId: number;
+  kind: MessageKind;
+  authorUserId: number | null;
+  text: string;
+  /** How it reached us (default portal), and the provider's id of an inbound text or e-mail. */
+  source?: "portal" | "sms" | "email";
+  externalId?: string | null;
+  followUpId?: number;
+};
+
+/** Adds a message. The same provider id from the same source twice breaks a unique index (PostgreSQL 23505). */
+export async function insertMessage(trx: Knex.Transaction, message: NewMessage): Promise<number> {
   const [row] = await trx("messages")
-    .insert({ conversation_id: message.conversationId, kind: message.kind, author_user_id: message.authorUserId, text: message.text })
+    .insert({
+      conversation_id: message.conversationId,
+      kind: message.kind,
+      author_user_id: message.authorUserId,
+      text: message.text,
+      source: message.source ?? "portal",
+      external_id: message.externalId ?? null,
+      follow_up_id: message.followUpId ?? null,
+    })
     .returning<{ id: string }[]>("id");
   return Number(row!.id);
 }
+
+export const isUniqueViolation = (err: unknown) => (err as { code?: unknown } | null)?.code === "23505";
 
 /** Marks the thread's open questions answered; only those asked before this moment. */
 export async function resolveOpenQuestions(trx: Knex.Transaction, conversationId: number, userId: number): Promise<number> {

@@ -1,4 +1,3 @@
-import type { Knex } from "knex";
 import type { Db } from "../../db.ts";
 
 export type Texter = { customerId: number; userId: number; companyId: number; senderName: string; companyName: string; companyPhone: string | null };
@@ -53,13 +52,6 @@ export async function textAlreadyFiled(db: Db, messageSid: string): Promise<bool
   return Boolean(await db("unmatched_inbound").where({ channel: "sms", external_id: messageSid }).first("id"));
 }
 
-export async function insertTextedQuestion(trx: Knex.Transaction, message: { conversationId: number; authorUserId: number; text: string; messageSid: string | null }): Promise<number> {
-  const [row] = await trx("messages")
-    .insert({ conversation_id: message.conversationId, kind: "question", author_user_id: message.authorUserId, text: message.text, source: "sms", external_id: message.messageSid })
-    .returning<{ id: string }[]>("id");
-  return Number(row!.id);
-}
-
 /** Keeps an unmatched text; undefined when the same MessageSid was already kept (a repeated webhook). */
 export async function insertUnmatched(
   db: Db,
@@ -86,4 +78,3 @@ export async function unmatchedRecently(db: Db, sender: string, exceptId: number
   return Boolean(row);
 }
 
-export const isUniqueViolation = (err: unknown) => (err as { code?: unknown } | null)?.code === "23505";

@@ -6,10 +6,10 @@ import type { PhotoStorage } from "../../storage/index.ts";
 import { processPhoto, type ProcessedPhoto } from "../photos/image-pipeline.ts";
 import { deletePhotoFiles, writePhotoFiles } from "../photos/photo-files.ts";
 import { insertPhotoRows } from "../photos/repo.ts";
-import { ensureConversation } from "../questions/repo.ts";
+import { ensureConversation, insertMessage, isUniqueViolation } from "../questions/repo.ts";
 import { ALL_MEDIA_TIMEOUT_MS, fetchMedia, type InboundMedia } from "./media.ts";
 import { photoRefusalReasons } from "./replies.ts";
-import { insertTextedQuestion, isUniqueViolation, type Texter } from "./repo.ts";
+import type { Texter } from "./repo.ts";
 
 export type InboundDeps = { db: Db; config: Config; storage: PhotoStorage };
 
@@ -62,7 +62,7 @@ export async function fileTextedQuestion(
   try {
     await deps.db.transaction(async (trx) => {
       const conversation = await ensureConversation(trx, planId);
-      const id = await insertTextedQuestion(trx, { conversationId: conversation.id, authorUserId: texter.userId, text: words, messageSid: text.messageSid });
+      const id = await insertMessage(trx, { conversationId: conversation.id, kind: "question", authorUserId: texter.userId, text: words, source: "sms", externalId: text.messageSid });
       await insertPhotoRows(trx, id, files);
     });
   } catch (err) {
