@@ -10,9 +10,9 @@ function utcDate(iso: IsoDate): Date {
   return new Date(Date.UTC(year, month - 1, day));
 }
 
-/** The locale that writes dates the way our homeowners read them: month first in US English ("Nov 3"), "3 nov" in Spanish. */
+/** The locale that writes dates the way our homeowners read them ("3 Nov" / "3 nov"). */
 function dateLocale(language: string): string {
-  return language.startsWith("es") ? "es-US" : "en-US";
+  return language.startsWith("es") ? "es-US" : "en-GB";
 }
 
 /**
