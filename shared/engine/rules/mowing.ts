@@ -54,10 +54,13 @@ function whyFor(text: string, range: SourcedRange): Why {
 /**
  * Winter ryegrass, or seed that is all warm-season, is first cut at the top of its own range (never above
  * the mower's highest setting) and brought down to the lawn's usual height kept inside that range.
- * Anything else (cool-season or mixed seed) keeps the highest-setting rule: null.
+ * Anything else (cool-season or mixed seed, or summer-grass seed patched into a cool-season lawn, whose
+ * grass would be scalped) keeps the highest-setting rule: null.
  */
 function speciesHeights(ctx: PlanContext, usualHeight: number): SpeciesHeights | null {
   const { visit, property } = ctx.input;
+  const newLawn = property.lawnCondition === "bare" || ctx.services.has("new_seeding");
+  if (ctx.lawnSeason !== "warm" && !newLawn) return null;
   let range: SourcedRange | null = null;
   let name = "";
   if (isWinterOverseeding(ctx)) {

@@ -37,7 +37,7 @@ const TEXT = {
   coolSoilHomeowner:
     "This seed sprouts only once the soil warms up, which may be weeks away. Keep it damp as your plan says; sprouts may come later than the dates shown.",
   emergenceCrew: (names: string, min: number, max: number) =>
-    `${names} emerges slowly: expect sprouts in about ${min}–${max} days in warm soil, and a long establishment before the first frost.`,
+    `${names} seed is slow to come up: expect sprouts in about ${min}–${max} days in warm soil, and a long establishment before the first frost.`,
   emergenceReason: "Warm-season seed is slower to sprout and to fill in than cool-season seed.",
   emergenceHomeowner: (min: number, max: number) =>
     `Your new grass may take about ${min}–${max} days to sprout, longer if the weather turns cool. Keep the seed damp every day until it does.`,
