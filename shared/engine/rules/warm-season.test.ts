@@ -76,16 +76,18 @@ describe("winter ryegrass prep and spring transition (common practice)", () => {
     expect(codes(winter({ visit: { services: ["dethatching", "overseeding"] } })).has("winter_overseeding_prep")).toBe(false);
   });
 
-  it("tells both that the bermudagrass competes in spring: lower the mowing toward its summer height (top of 1–1.5 in, from memory)", () => {
-    expect(told(winterRyegrassVisit(), "winter_ryegrass_spring_transition", "crew")?.message).toMatch(/lower the mowing a notch at a time to about 1\.5 in/);
+  it("tells both that the bermudagrass competes in spring: lower the mowing toward its summer height (low end of 1–1.5 in, from memory)", () => {
+    expect(told(winterRyegrassVisit(), "winter_ryegrass_spring_transition", "crew")?.message).toMatch(/lower the mowing a notch at a time to about 1 in/);
     const homeowner = told(winterRyegrassVisit(), "winter_ryegrass_spring_transition", "homeowner");
     expect(homeowner).toMatchObject({ severity: "info", provenance: "common practice" });
-    expect(homeowner?.message).toMatch(/Next spring.*about 1\.5 in/);
+    expect(homeowner?.message).toMatch(/Next spring.*about 1 in\./);
   });
 
-  it("without the lawn's species the homeowner is pointed to their usual summer height", () => {
-    const raw = winter({ property: { grassType: { species: [], season: "warm" } } });
-    expect(told(raw, "winter_ryegrass_spring_transition", "homeowner")?.message).toMatch(/your usual summer height/);
+  it("without the lawn's species, or on a tall summer grass (St. Augustine 2.5–4 in, above the ryegrass's 2 in), no figure: their usual summer height", () => {
+    const unknown = winter({ property: { grassType: { species: [], season: "warm" } } });
+    expect(told(unknown, "winter_ryegrass_spring_transition", "homeowner")?.message).toMatch(/your usual summer height/);
+    const stAugustine = winter({ property: { grassType: { species: ["st_augustinegrass"] }, currentMowingHeightIn: 3 } });
+    expect(told(stAugustine, "winter_ryegrass_spring_transition", "homeowner")?.message).toMatch(/your usual summer height/);
   });
 
   it("a cool-season overseeding gets none of the warm-season findings", () => {

@@ -3,7 +3,7 @@ import { monthOfDayNumber } from "../dates.ts";
 import { formatInches } from "../format.ts";
 import type { Sourced, SourcedRange } from "../tables/provenance.ts";
 import { SPECIES_FACTS, type Species, type SpeciesFacts } from "../tables/species.ts";
-import { WARM_SEASON_MOWING_HEIGHT_IN } from "../tables/mowing.ts";
+import { WARM_SEASON_MOWING_HEIGHT_IN, WINTER_RYEGRASS_MOWING_HEIGHT_IN } from "../tables/mowing.ts";
 import {
   SPRING_TRANSITION,
   WARM_SEASON_GERMINATION_SOIL_F,
@@ -104,14 +104,17 @@ export function winterOverseedingPrepHeight(ctx: PlanContext, settingStepIn: num
   };
 }
 
-/** The lawn's own summer height to come back to in spring: the lowest top of its warm species' ranges. */
-function summerHeightText(ctx: PlanContext): string | null {
+/**
+ * How low to take the lawn in spring: the low end of its summer grass's range, when that is below the
+ * ryegrass's winter height. A tall summer grass (St. Augustine, bahia) or an unknown one gets no figure.
+ */
+function springHeightText(ctx: PlanContext): string | null {
   let height: number | null = null;
   for (const s of lawnSpecies(ctx)) {
     const range = WARM_SEASON_MOWING_HEIGHT_IN[s];
-    if (range && (height === null || range.max < height)) height = range.max;
+    if (range && (height === null || range.min < height)) height = range.min;
   }
-  return height === null ? null : formatInches(height);
+  return height === null || height >= WINTER_RYEGRASS_MOWING_HEIGHT_IN.min ? null : formatInches(height);
 }
 
 /* ── Findings ───────────────────────────────────────────────────────────────────────────────── */
@@ -130,7 +133,7 @@ function winterOverseedingFindings(ctx: PlanContext, out: WarningFinding[]): voi
     out.push(finding("winter_overseeding_prep", "info", TEXT.prepCrew, TEXT.prepReason, { source: WINTER_OVERSEEDING_PREP.scalpSource, provenance: WINTER_OVERSEEDING_PREP.scalpProvenance }));
   }
   out.push(
-    finding("winter_ryegrass_spring_transition", "info", TEXT.springCrew(summerHeightText(ctx) ?? "the lawn's summer height"), TEXT.springReason, SPRING_TRANSITION),
+    finding("winter_ryegrass_spring_transition", "info", TEXT.springCrew(springHeightText(ctx) ?? "the lawn's summer height"), TEXT.springReason, SPRING_TRANSITION),
   );
 }
 
@@ -181,7 +184,7 @@ export const WARM_SEASON_HOMEOWNER: Readonly<Record<string, (ctx: PlanContext, f
   },
   winter_ryegrass_spring_transition: (ctx) => ({
     severity: "info",
-    message: TEXT.springHomeowner(summerHeightText(ctx) ?? "your usual summer height"),
+    message: TEXT.springHomeowner(springHeightText(ctx) ?? "your usual summer height"),
     reason: TEXT.springReason,
   }),
   warm_season_seed_cool_soil: () => ({ severity: "caution", message: TEXT.coolSoilHomeowner, reason: TEXT.coolSoilHomeownerReason }),
