@@ -60,12 +60,12 @@ function whyFor(text: string, range: SourcedRange): Why {
 function speciesHeights(ctx: PlanContext, usualHeight: number): SpeciesHeights | null {
   const { visit, property } = ctx.input;
   const newLawn = property.lawnCondition === "bare" || ctx.services.has("new_seeding");
-  if (ctx.lawnSeason !== "warm" && !newLawn) return null;
   let range: SourcedRange | null = null;
   let name = "";
   if (isWinterOverseeding(ctx)) {
     range = WINTER_RYEGRASS_MOWING_HEIGHT_IN;
   } else {
+    if (ctx.lawnSeason !== "warm" && !newLawn) return null;
     for (const entry of visit.seedMix) {
       const r = WARM_SEASON_MOWING_HEIGHT_IN[entry.species];
       if (!r) return null;

@@ -128,6 +128,11 @@ describe("low cut before winter ryegrass", () => {
     expect(cuts[0]?.why.source).toMatch(/Augusta Chronicle/);
   });
 
+  it("bermudagrass recorded with last winter's ryegrass is scalped too", () => {
+    const raw = withChanges({ property: { grassType: { species: ["bermudagrass", "perennial_ryegrass"] } } }, winterRyegrassVisit());
+    expect(prepMows(raw)).toEqual([1]);
+  });
+
   it("a lawn given only as warm-season is taken one setting lower too, since it may not be bermudagrass", () => {
     const raw = withChanges({ property: { grassType: { species: [], season: "warm" }, currentMowingHeightIn: 2.5 } }, winterRyegrassVisit());
     expect(prepMows(raw)).toEqual([2]);

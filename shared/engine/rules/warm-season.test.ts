@@ -31,6 +31,13 @@ describe("winter ryegrass on bermudagrass: its own seed rate", () => {
     expect(crew).toMatchObject({ provenance: "from memory", source: expect.stringMatching(/Clemson/) });
   });
 
+  it("a bermudagrass lawn recorded with last winter's ryegrass is still a warm-season lawn; one with tall fescue is not", () => {
+    const withRyegrass = winter({ property: { grassType: { species: ["bermudagrass", "perennial_ryegrass"] } } });
+    expect(generatePlan(valid(withRyegrass)).summary.seed?.expectedRangeLbPer1000.basis).toBe("winter_overseeding");
+    const withFescue = winter({ property: { grassType: { species: ["bermudagrass", "tall_fescue"] } } });
+    expect(generatePlan(valid(withFescue)).summary.seed?.expectedRangeLbPer1000.basis).toBe("overseeding");
+  });
+
   it("a lawn given only as warm-season counts too; a bare warm-season lawn sown with ryegrass is a new seeding, not winter overseeding", () => {
     const warmOnly = winter({ property: { grassType: { species: [], season: "warm" } } });
     expect(generatePlan(valid(warmOnly)).summary.seed?.expectedRangeLbPer1000.basis).toBe("winter_overseeding");

@@ -50,13 +50,24 @@ function lawnSpecies(ctx: PlanContext): readonly Species[] {
   return ctx.input.property.grassType.species;
 }
 
+/** A warm-season lawn, also when last winter's ryegrass was recorded among its grasses. */
+function isWarmLawn(ctx: PlanContext): boolean {
+  if (ctx.lawnSeason !== "mixed") return ctx.lawnSeason === "warm";
+  let warm = false;
+  for (const s of lawnSpecies(ctx)) {
+    if (SPECIES_FACTS[s].season === "warm") warm = true;
+    else if (s !== "perennial_ryegrass") return false;
+  }
+  return warm;
+}
+
 /**
  * Cool-season seed (in practice ryegrass) sown into an established warm-season lawn: winter overseeding
  * for color. Its window is the season check's business; this only says what kind of work it is.
  */
 export function isWinterOverseeding(ctx: PlanContext): boolean {
   const { visit, property } = ctx.input;
-  if (ctx.lawnSeason !== "warm" || visit.seedMix.length === 0) return false;
+  if (!isWarmLawn(ctx) || visit.seedMix.length === 0) return false;
   if (property.lawnCondition === "bare" || ctx.services.has("new_seeding")) return false;
   for (const entry of visit.seedMix) if (SPECIES_FACTS[entry.species].season !== "cool") return false;
   return true;
@@ -90,7 +101,7 @@ export function winterOverseedingPrepHeight(ctx: PlanContext, settingStepIn: num
   const species = lawnSpecies(ctx);
   const { property } = ctx.input;
   const usual = Math.min(property.currentMowingHeightIn, property.mowerHighestSettingIn);
-  if (species.length > 0 && species.every((s) => s === "bermudagrass")) {
+  if (species.includes("bermudagrass") && species.every((s) => s === "bermudagrass" || s === "perennial_ryegrass")) {
     return {
       heightIn: WINTER_OVERSEEDING_PREP.scalpHeightIn,
       source: WINTER_OVERSEEDING_PREP.scalpSource,
