@@ -9,6 +9,7 @@ import { nitrogenWarnings } from "./rules/nitrogen-warnings.ts";
 import { warningsForAudiences } from "./rules/audiences.ts";
 import { planWarnings } from "./rules/warnings.ts";
 import { wateringSteps } from "./rules/watering.ts";
+import { warmSeasonWarnings } from "./rules/warm-season.ts";
 import { hashInput } from "./hash.ts";
 import type { PlanInput } from "./schemas/plan-input.ts";
 import { sortSteps } from "./steps.ts";
@@ -17,7 +18,7 @@ import { CAUTION_IDS, CAUTIONS, type CautionId } from "./tables/cautions.ts";
 import type { HoldOff, PhaseRange, Plan, PlanStep, PlanWarning } from "./types.ts";
 
 /** Bump when the same input would produce a different plan, so stored plans can be told apart. */
-export const ENGINE_VERSION = 2;
+export const ENGINE_VERSION = 3;
 
 /** Steps the homeowner reported skipping keep their place in the plan, marked skipped. */
 function applySkips(ctx: PlanContext, steps: PlanStep[]): PlanStep[] {
@@ -62,7 +63,7 @@ function cautionsUsed(groups: readonly (readonly { cautions: readonly CautionId[
  */
 export function visitWarnings(input: PlanInput): PlanWarning[] {
   const ctx = buildContext(input);
-  return warningsForAudiences(ctx, planWarnings(ctx));
+  return warningsForAudiences(ctx, [...planWarnings(ctx), ...warmSeasonWarnings(ctx)]);
 }
 
 /**
@@ -108,7 +109,7 @@ export function generatePlan(input: PlanInput): Plan {
     prepSteps: prep,
     steps,
     holdOffs,
-    warnings: warningsForAudiences(ctx, [...planWarnings(ctx), ...nitrogenWarnings(ctx)]),
+    warnings: warningsForAudiences(ctx, [...planWarnings(ctx), ...nitrogenWarnings(ctx), ...warmSeasonWarnings(ctx)]),
     summary: calculatorSummary(ctx),
     cautions: cautionsUsed([prep, steps, holdOffs]),
   };

@@ -89,6 +89,9 @@ export interface PlanWarning extends WarningFinding {
   readonly audience: WarningAudience;
 }
 
+/** Which seed-rate range a seeding is judged by; winter_overseeding is ryegrass sown into a warm-season lawn for winter color. */
+export type SeedRateBasis = "overseeding" | "new_seeding" | "winter_overseeding";
+
 export interface SpeciesSeedSummary {
   readonly species: Species;
   readonly percent: number;
@@ -107,7 +110,7 @@ export interface SeedSummary {
   readonly pureLiveSeedLb: number;
   /** Null when seeds per pound are not published for every species in the mix. */
   readonly seedsPerSqFt: number | null;
-  readonly expectedRangeLbPer1000: { readonly min: number; readonly max: number; readonly basis: "overseeding" | "new_seeding" };
+  readonly expectedRangeLbPer1000: { readonly min: number; readonly max: number; readonly basis: SeedRateBasis };
   readonly perSpecies: readonly SpeciesSeedSummary[];
 }
 

@@ -2,6 +2,7 @@ import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { generatePlan } from "../generate.ts";
 import { valid, withChanges } from "../testing/fixtures.ts";
+import { winterRyegrassVisit } from "../testing/warm-fixtures.ts";
 import { mowDownStages } from "./prep.ts";
 
 describe("mowDownStages (one-third rule: University of Minnesota Extension #764665; staging: common practice)", () => {
@@ -101,5 +102,39 @@ describe("aeration prep and after-care (common practice)", () => {
   it("adds neither to a visit without core aeration", () => {
     const plan = generatePlan(valid(withChanges({ visit: { services: ["overseeding", "starter_fertiliser"] } })));
     expect([...plan.prepSteps, ...plan.steps].some((s) => /water_before_aeration|leave_cores/.test(s.key))).toBe(false);
+  });
+});
+
+describe("low cut before winter ryegrass", () => {
+  const prepMows = (raw: Parameters<typeof valid>[0]) =>
+    generatePlan(valid(raw)).prepSteps.filter((s) => s.kind === "prep_mow").map((s) => s.heightIn);
+
+  it("bermudagrass at 1.5 in is scalped to 1 in the day before (Kansas City Star column: 1–1.5 in before verticutting), below the 2 in of a cool-season overseeding", () => {
+    const plan = generatePlan(valid(winterRyegrassVisit()));
+    const [cut] = plan.prepSteps.filter((s) => s.kind === "prep_mow");
+    expect(cut).toMatchObject({ date: "2026-09-30", heightIn: 1 });
+    expect(cut?.detail).toMatch(/ryegrass seed reach the soil/);
+    expect(cut?.why.source).toMatch(/Kansas City Star/);
+  });
+
+  it("bermudagrass kept at 2 in comes down in stages within the one-third rule: 2 → 1.5 → 1 (University of Minnesota Extension #764665)", () => {
+    expect(prepMows(withChanges({ property: { currentMowingHeightIn: 2 } }, winterRyegrassVisit()))).toEqual([1.5, 1]);
+  });
+
+  it("zoysiagrass can't be scalped: one mower setting lower than usual, 2 → 1.5 in (Augusta Chronicle column, 2006)", () => {
+    const raw = withChanges({ property: { grassType: { species: ["zoysiagrass"] }, currentMowingHeightIn: 2 } }, winterRyegrassVisit());
+    const cuts = generatePlan(valid(raw)).prepSteps.filter((s) => s.kind === "prep_mow");
+    expect(cuts.map((s) => s.heightIn)).toEqual([1.5]);
+    expect(cuts[0]?.why.source).toMatch(/Augusta Chronicle/);
+  });
+
+  it("bermudagrass recorded with last winter's ryegrass is scalped too", () => {
+    const raw = withChanges({ property: { grassType: { species: ["bermudagrass", "perennial_ryegrass"] } } }, winterRyegrassVisit());
+    expect(prepMows(raw)).toEqual([1]);
+  });
+
+  it("a lawn given only as warm-season is taken one setting lower too, since it may not be bermudagrass", () => {
+    const raw = withChanges({ property: { grassType: { species: [], season: "warm" }, currentMowingHeightIn: 2.5 } }, winterRyegrassVisit());
+    expect(prepMows(raw)).toEqual([2]);
   });
 });

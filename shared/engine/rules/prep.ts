@@ -5,6 +5,7 @@ import { MOW_DOWN_RULE, ONE_THIRD_RULE } from "../tables/mowing.ts";
 import { AERATION_PREP_RULE } from "../tables/watering.ts";
 import { SOURCES } from "../tables/sources.ts";
 import type { PlanStep } from "../types.ts";
+import { winterOverseedingPrepHeight } from "./warm-season.ts";
 
 const EPSILON = 1e-9;
 const roundHeight = (x: number) => Math.round(x * 1000) / 1000;
@@ -37,6 +38,12 @@ const mowDownWhy = {
   text: "Mowing in stages keeps each cut within a third of the blade, so the lawn is not shocked before the seed goes down.",
   source: `${ONE_THIRD_RULE.source}; staging: ${MOW_DOWN_RULE.source}`,
   provenance: "published",
+} as const;
+
+const WINTER_LOW_CUT_TEXT = {
+  why: "A low cut opens the summer grass so the ryegrass seed reaches the soil and gets the light it needs to sprout.",
+  lastCut:
+    "This low cut lets the ryegrass seed reach the soil. Bag or rake up the clippings and any loose dead runners so the seed is not left lying on them.",
 } as const;
 
 const flagWhy = {
@@ -104,7 +111,12 @@ export function prepSteps(ctx: PlanContext): PlanStep[] {
     (services.has("overseeding") || services.has("slit_seeding")) && property.lawnCondition !== "bare";
   if (overseedingIntoTurf) {
     const step = property.mowerSettingStepIn ?? MOW_DOWN_RULE.assumedSettingStepIn;
-    const stages = mowDownStages(property.currentMowingHeightIn, program.seedingMowHeightIn, step);
+    // Winter ryegrass on a warm-season lawn goes lower than a cool-season overseeding (scalped bermudagrass).
+    const winter = winterOverseedingPrepHeight(ctx, step);
+    const stages = mowDownStages(property.currentMowingHeightIn, winter?.heightIn ?? program.seedingMowHeightIn, step);
+    const why = winter
+      ? { text: WINTER_LOW_CUT_TEXT.why, source: `${winter.source}; ${ONE_THIRD_RULE.source}`, provenance: winter.provenance }
+      : mowDownWhy;
     stages.forEach((height, i) => {
       const daysBeforeVisit = 1 + (stages.length - 1 - i) * program.prepMowStageDays;
       const date = ctx.dateOf(-daysBeforeVisit);
@@ -116,10 +128,12 @@ export function prepSteps(ctx: PlanContext): PlanStep[] {
         kind: "prep_mow",
         title: `Mow at ${formatInches(height)}${stages.length > 1 ? ` (cut ${i + 1} of ${stages.length} before the visit)` : ""}`,
         detail: isLast
-          ? "This is the short cut the seed needs. Bag or rake up the clippings so seed can reach the soil."
+          ? winter
+            ? WINTER_LOW_CUT_TEXT.lastCut
+            : "This is the short cut the seed needs. Bag or rake up the clippings so seed can reach the soil."
           : `Take the grass down to ${formatInches(height)} and leave it there for about a week before the next cut.`,
         heightIn: height,
-        why: mowDownWhy,
+        why,
         cautions: ["equipment_safety"],
       });
     });

@@ -6,10 +6,11 @@ import { SOURCES } from "../tables/sources.ts";
 import { SPECIES_FACTS } from "../tables/species.ts";
 import { FROST_RULE } from "../tables/timing.ts";
 // The rules here find; rules/audiences.ts words each finding for the crew and, where it helps, the homeowner.
-import type { WarningFinding as PlanWarning } from "../types.ts";
+import type { WarningFinding as PlanWarning, SeedRateBasis } from "../types.ts";
 import { isHighNQuickRelease } from "./feeding.ts";
 import { isAutumnVisit } from "./seasonal.ts";
 import { assumedRatePhrase } from "./watering-notes.ts";
+import { isWinterOverseeding, seedRangeFor } from "./warm-season.ts";
 
 /** How far outside the species range (as a fraction of the range's edge) turns a caution into a risk. */
 const FAR_OUTSIDE_RANGE = 0.5;
@@ -31,13 +32,14 @@ export function frostWarning(daysToFrost: number): PlanWarning | null {
 }
 
 /** Which seeding-rate range applies: a new lawn uses the new-seeding range, anything sown into turf the overseeding range. */
-export function seedRateBasis(ctx: PlanContext): "new_seeding" | "overseeding" {
+export function seedRateBasis(ctx: PlanContext): SeedRateBasis {
+  if (isWinterOverseeding(ctx)) return "winter_overseeding";
   return ctx.services.has("new_seeding") || ctx.input.property.lawnCondition === "bare" ? "new_seeding" : "overseeding";
 }
 
-export function expectedSeedRange(ctx: PlanContext): { min: number; max: number; basis: "new_seeding" | "overseeding" } {
+export function expectedSeedRange(ctx: PlanContext): { min: number; max: number; basis: SeedRateBasis } {
   const basis = seedRateBasis(ctx);
-  const range = weightedRange(ctx.input.visit.seedMix, (f) => (basis === "new_seeding" ? f.newSeedingLbPer1000 : f.overseedingLbPer1000));
+  const range = weightedRange(ctx.input.visit.seedMix, (f) => seedRangeFor(basis, f));
   return { ...range, basis };
 }
 
@@ -50,12 +52,10 @@ function seedRateWarning(ctx: PlanContext): PlanWarning | null {
   if (!below && !above) return null;
   const far = below ? rate < range.min * (1 - FAR_OUTSIDE_RANGE) : rate > range.max * (1 + FAR_OUTSIDE_RANGE);
   const sources = [...new Set(ctx.input.visit.seedMix.map((e) => {
-    const facts = SPECIES_FACTS[e.species];
-    return (range.basis === "new_seeding" ? facts.newSeedingLbPer1000 : facts.overseedingLbPer1000).source;
+    return seedRangeFor(range.basis, SPECIES_FACTS[e.species]).source;
   }))];
   const provenances = ctx.input.visit.seedMix.map((e) => {
-    const facts = SPECIES_FACTS[e.species];
-    return (range.basis === "new_seeding" ? facts.newSeedingLbPer1000 : facts.overseedingLbPer1000).provenance;
+    return seedRangeFor(range.basis, SPECIES_FACTS[e.species]).provenance;
   });
   return {
     code: below ? "seed_rate_low" : "seed_rate_high",

@@ -42,6 +42,12 @@ const emergenceFromMemory = (min: number, max: number): SourcedRange => ({
   provenance: "from memory",
 });
 
+/*
+ * Warm-season emergence days are recalled, not read: TRADE-REFERENCES.md gives none. A consumer
+ * page (about.com, "Grass Seed Germination Rates") lists bermuda 10–30, zoysia 14–21, centipede
+ * 14–21 and bahia 14–28 days, close to these but not the same; kept "from memory" until an
+ * extension publication is read.
+ */
 const warmSeasonFromMemory = (min: number, max: number): SourcedRange => ({
   min,
   max,

@@ -43,7 +43,7 @@ const seedSchema = z.object({
   bulkSeedLb: z.number(),
   pureLiveSeedLb: z.number(),
   seedsPerSqFt: z.number().nullable(),
-  expectedRangeLbPer1000: z.object({ min: z.number(), max: z.number(), basis: z.enum(["overseeding", "new_seeding"]) }),
+  expectedRangeLbPer1000: z.object({ min: z.number(), max: z.number(), basis: z.enum(["overseeding", "new_seeding", "winter_overseeding"]) }),
   perSpecies: z.array(
     z.object({
       species: z.enum(SPECIES),

@@ -7,6 +7,13 @@ import { FigureList } from "./figure-list.tsx";
 
 type Npk = CalculatorSummary["nutrientsTotal"];
 
+type SeedRateBasis = NonNullable<CalculatorSummary["seed"]>["expectedRangeLbPer1000"]["basis"];
+const SEED_RATE_BASIS_LABEL: Record<SeedRateBasis, string> = {
+  new_seeding: "new seeding",
+  overseeding: "overseeding",
+  winter_overseeding: "winter ryegrass on a warm-season lawn",
+};
+
 const lb = (value: number, digits = 1) => `${formatFigure(value, digits)} lb (${formatFigure(lbToKg(value), digits)} kg)`;
 const npk = ({ n, p, k }: Npk, digits = 2) => `${formatFigure(n, digits)} – ${formatFigure(p, digits)} – ${formatFigure(k, digits)} lb`;
 const npkKg = ({ n, p, k }: Npk) => `${formatFigure(lbToKg(n), 2)} – ${formatFigure(lbToKg(p), 2)} – ${formatFigure(lbToKg(k), 2)} kg`;
@@ -31,7 +38,7 @@ export function PlanFigures({ summary }: { summary: CalculatorSummary }) {
                   value: `${formatFigure(seed.rateLbPer1000, 2)} lb per 1,000 ft² (${formatFigure(seed.rateGPerM2, 1)} g/m²)`,
                 },
                 {
-                  label: `Usual rate for this mix (${seed.expectedRangeLbPer1000.basis === "new_seeding" ? "new seeding" : "overseeding"})`,
+                  label: `Usual rate for this mix (${SEED_RATE_BASIS_LABEL[seed.expectedRangeLbPer1000.basis]})`,
                   value: `${formatFigure(seed.expectedRangeLbPer1000.min, 2)}–${formatFigure(seed.expectedRangeLbPer1000.max, 2)} lb per 1,000 ft²`,
                 },
                 { label: "Pure live seed (PLS)", value: formatPercent(seed.plsFraction) },
