@@ -158,11 +158,11 @@ function BlackoutRow({ index, register, errors, onRemove }: { index: number; reg
     <li className="rounded-lg border border-line bg-surface p-3">
       <fieldset className="flex flex-col gap-2">
         <legend className="font-semibold">Window {index + 1}</legend>
-        <div className="grid grid-cols-[minmax(0,1fr)_5rem] gap-2">
+        <div className="grid grid-cols-[minmax(0,1fr)_6rem] gap-2">
           <SelectField label="From month" options={monthOptions} {...register(`blackouts.${index}.fromMonth`)} />
-          <TextField label="Day" inputMode="numeric" error={fromError} {...register(`blackouts.${index}.fromDay`)} />
+          <TextField label="From day" inputMode="numeric" error={fromError} {...register(`blackouts.${index}.fromDay`)} />
           <SelectField label="To month" options={monthOptions} {...register(`blackouts.${index}.toMonth`)} />
-          <TextField label="Day" inputMode="numeric" error={toError} {...register(`blackouts.${index}.toDay`)} />
+          <TextField label="To day" inputMode="numeric" error={toError} {...register(`blackouts.${index}.toDay`)} />
         </div>
         <Button variant="quiet" className="self-start" onClick={onRemove}>
           Remove window {index + 1}
