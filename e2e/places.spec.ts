@@ -15,6 +15,11 @@ test("a manager adds a place, sees its effect on a sample plan, and deletes it",
   await expect(example.getByText("Example", { exact: true })).toBeVisible();
 
   await page.getByRole("button", { name: "Add a place" }).click();
+  // Saving an empty form says why, where the keyboard is.
+  await page.getByRole("button", { name: "Add place" }).click();
+  await expect(page.getByText("Fix the marked rules to save.")).toBeVisible();
+  await expect(page.getByText("Fix the marked rules to save.").locator("xpath=../..")).toBeFocused();
+  await expect(page.getByText("Name the place")).toBeVisible();
   await page.getByLabel("Name").fill("Test county (e2e)");
   await page.getByLabel("State").fill("OH");
   await page.getByLabel("ZIP codes starting with").fill("44990");
@@ -46,4 +51,14 @@ test("a manager adds a place, sees its effect on a sample plan, and deletes it",
   await dialog.getByRole("button", { name: "Delete place" }).click();
   await expect(page.getByText(/Deleted Test county \(e2e\)/)).toBeVisible();
   await expect(page.getByRole("heading", { name: "Test county (e2e)" })).toHaveCount(0);
+});
+
+test("a technician reads the places' rules but cannot change them", async ({ page }) => {
+  await signInStaff(page, "marco@cobblefield.example");
+  await page.goto("/staff/places");
+  await expect(page.getByRole("heading", { level: 1, name: "Places" })).toBeVisible();
+  await expect(page.getByRole("heading", { name: /Example place/ })).toBeVisible();
+  await expect(page.getByRole("button", { name: "Add a place" })).toHaveCount(0);
+  await expect(page.getByRole("button", { name: /^Edit / })).toHaveCount(0);
+  await expect(page.getByRole("button", { name: /^Delete / })).toHaveCount(0);
 });

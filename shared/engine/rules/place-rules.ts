@@ -27,7 +27,7 @@ const TEXT = {
   wateringMoved: (place: string, days: string) => ` Moved to a day ${place} allows watering (${days}).`,
   newLawnStep: (place: string) => ` ${place} limits watering days: see the note on new lawns in your plan.`,
   blackoutVisitMessage: (place: string, window: string) =>
-    `Fertilizer was applied at this visit, inside ${place}'s blackout window (${window}).`,
+    `Fertilizer was applied at this visit, inside a blackout window of ${place} (${window}).`,
   blackoutVisitReason: "The company's rules for this place allow no fertilizer on these dates.",
   phosphorusMessage: (place: string, products: string) =>
     `${place} allows phosphorus only with a reason (new seeding or a soil test), and this visit records neither. Phosphorus in: ${products}.`,
@@ -237,10 +237,13 @@ function newLawnWateringRestricted(ctx: PlanContext): { rules: PlaceRules; until
   return { rules, until: longDate(ctx.dateOf(last)) };
 }
 
+/** Shared, never mutated: most plans have no place rules, and the engine runs 10,000 plans a batch. */
+const NO_FINDINGS: readonly WarningFinding[] = [];
+
 /** What the place's rules find about the visit itself, for the crew (and, for watering, the homeowner). */
-export function placeRuleFindings(ctx: PlanContext): WarningFinding[] {
+export function placeRuleFindings(ctx: PlanContext): readonly WarningFinding[] {
   const rules = ctx.input.placeRules;
-  if (!rules) return [];
+  if (!rules) return NO_FINDINGS;
   const findings: WarningFinding[] = [];
   const { visit } = ctx.input;
 

@@ -1,4 +1,4 @@
-import { useState } from "react";
+import { useEffect, useRef, useState } from "react";
 import { useFieldArray, useForm, type UseFormRegister } from "react-hook-form";
 import type { Place } from "#shared/schemas/place-rules";
 import { Button, CheckboxField, FieldError, Notice, SelectField, TextField, isApiRequestError } from "#shared/ui/index";
@@ -27,11 +27,20 @@ export function PlaceEditor({ place, onDone }: PlaceEditorProps) {
   const errors: PlaceErrors = { ...serverErrors, ...(submitted && !check.ok ? check.errors : {}) };
   const save = useSavePlace();
   const [formError, setFormError] = useState<string | null>(null);
+  // Each refused attempt moves focus to the message above the form, so keyboard and screen-reader users hear why.
+  const [attempts, setAttempts] = useState(0);
+  const messagesRef = useRef<HTMLDivElement>(null);
+  useEffect(() => {
+    if (attempts > 0) messagesRef.current?.focus();
+  }, [attempts]);
 
   const submit = form.handleSubmit(() => {
     setSubmitted(true);
     setFormError(null);
-    if (!check.ok) return;
+    if (!check.ok) {
+      setAttempts((n) => n + 1);
+      return;
+    }
     save.mutate(
       { id: place?.id ?? null, body: check.place },
       {
@@ -43,6 +52,7 @@ export function PlaceEditor({ place, onDone }: PlaceEditorProps) {
           } else {
             setFormError(isApiRequestError(error) ? error.message : "Something unexpected went wrong. Please try again.");
           }
+          setAttempts((n) => n + 1);
         },
       },
     );
@@ -63,8 +73,10 @@ export function PlaceEditor({ place, onDone }: PlaceEditorProps) {
         <h2 id={headingId} className="text-2xl text-pine-900">
           {place ? `Edit ${place.name}` : "Add a place"}
         </h2>
-        {formError && <Notice tone="danger">{formError}</Notice>}
-        {submitted && !check.ok && <Notice tone="warning">Fix the marked rules to save.</Notice>}
+        <div ref={messagesRef} tabIndex={-1} className="flex flex-col gap-2 scroll-mt-4 outline-none empty:hidden">
+          {formError && <Notice tone="danger">{formError}</Notice>}
+          {submitted && !check.ok && <Notice tone="warning">Fix the marked rules to save.</Notice>}
+        </div>
 
         <fieldset className="flex flex-col gap-4">
           <legend className="mb-2 text-xl">Where</legend>
@@ -99,10 +111,10 @@ export function PlaceEditor({ place, onDone }: PlaceEditorProps) {
 
         <SelectField
           label="Phosphorus"
-          hint="Starter fertilizers and many balanced ones contain phosphorus (the middle number on the bag)."
+          hint="Starter fertilizers and many balanced ones contain phosphorus (the middle number on the bag). The reasons a place may accept: new seeding, or a soil test showing a need."
           options={[
             { value: "allowed", label: "Allowed" },
-            { value: "needs_reason", label: "Only for new seeding or with a soil test" },
+            { value: "needs_reason", label: "Only with a reason" },
           ]}
           error={errorAt(errors, "phosphorus")}
           {...register("phosphorus")}
@@ -124,7 +136,7 @@ export function PlaceEditor({ place, onDone }: PlaceEditorProps) {
               </fieldset>
               <TextField
                 label="New lawns may be watered any day for (days)"
-                hint="Many water utilities exempt new seed or sod for a few weeks; 0 if this place doesn't."
+                hint="Some water utilities exempt new seed or sod for a few weeks; 0 if this place doesn't."
                 inputMode="numeric"
                 error={errorAt(errors, "watering.newLawnExemptDays")}
                 {...register("exemptDays")}

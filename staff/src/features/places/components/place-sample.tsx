@@ -84,7 +84,7 @@ function Comparison({ comparison }: { comparison: SampleComparison }) {
         <p>
           {waterings.moved === 0 && waterings.before === waterings.after
             ? `${waterings.after} watering days, unchanged.`
-            : `${waterings.after} watering days instead of ${waterings.before}; ${waterings.moved} moved to an allowed day.`}
+            : `${waterings.after} watering days${waterings.after === waterings.before ? "" : ` instead of ${waterings.before}`}; ${waterings.moved} moved to an allowed day.`}
         </p>
       </div>
       <div>
