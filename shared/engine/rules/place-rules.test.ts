@@ -68,6 +68,39 @@ describe("fertilizer blackout windows", () => {
     expect(note?.detail).toMatch(/Example County allows no fertilizer from September 1 to October 31/);
   });
 
+  it("waits up to 30 days for other feedings, within the plan: the follow-up feeding of October 23", () => {
+    const base = plan(seedingWithoutStarter());
+    expect(base.steps.find((s) => s.key === "feed:follow_up")?.date).toBe("2026-10-23");
+    expect(base.meta.planEnds >= "2026-11-23").toBe(true);
+    expect(FEED_DELAY_LIMIT_DAYS.other).toBe(30);
+    // Window ends November 21: November 22 is 30 days on, the longest wait allowed.
+    const edge = plan(withRules(seedingWithoutStarter(), { name: "Example County", fertilizerBlackouts: [{ from: "10-20", to: "11-21" }] }));
+    expect(edge.steps.find((s) => s.key === "feed:follow_up")?.date).toBe("2026-11-22");
+    // One day longer: November 23 is still inside the plan, but 31 days on.
+    const over = plan(withRules(seedingWithoutStarter(), { name: "Example County", fertilizerBlackouts: [{ from: "10-20", to: "11-22" }] }));
+    expect(over.steps.find((s) => s.key === "feed:follow_up")).toBeUndefined();
+    expect(over.steps.find((s) => s.key === "note:no_feed_feed_follow_up")?.date).toBe("2026-10-23");
+  });
+
+  it("leaves out a feeding on the plan's last day that falls in a blackout: the plan has no later day", () => {
+    // A thick cool-season lawn fed on September 10 gets its second fall feeding 6 weeks later (AUTUMN_FEEDING_N), the plan's last day.
+    const thick = withChanges({ property: { lawnCondition: "thick" } }, feedingVisit([{ name: "Lawn food 24-0-6", analysis: { n: 24, p: 0, k: 6 }, rateLbPer1000: 2 }]));
+    const base = plan(thick);
+    expect(base.steps.find((s) => s.key === "feed:autumn_split")?.date).toBe("2026-10-22");
+    expect(base.meta.planEnds).toBe("2026-10-22");
+    const blocked = plan(withRules(thick, { name: "Example County", fertilizerBlackouts: [{ from: "10-20", to: "10-31" }] }));
+    expect(blocked.steps.some((s) => s.kind === "feed")).toBe(false);
+    expect(blocked.steps.find((s) => s.key === "note:no_feed_feed_autumn_split")?.date).toBe("2026-10-22");
+  });
+
+  it("moves a feeding out of a window that runs over New Year", () => {
+    const december = withChanges({ visit: { date: "2026-12-20", services: ["overseeding"], products: [] }, property: { expectedFirstFrost: undefined } });
+    expect(plan(december).steps.find((s) => s.key === "feed:starter")?.date).toBe("2026-12-21");
+    const moved = plan(withRules(december, { name: "Example State", fertilizerBlackouts: [{ from: "12-15", to: "01-02" }] }));
+    // First day after January 2: January 3, 2027, a 13-day wait.
+    expect(moved.steps.find((s) => s.key === "feed:starter")?.date).toBe("2027-01-03");
+  });
+
   it("warns the crew when fertilizer went down on a blackout date", () => {
     const raw = withRules(feedingVisit([{ name: "Lawn food 24-0-6", analysis: { n: 24, p: 0, k: 6 }, rateLbPer1000: 3 }], "2026-12-05"), {
       name: "Example State",
