@@ -22,6 +22,7 @@ import { questionRoutes } from "./features/questions/routes.ts";
 import { photoRoutes } from "./features/photos/routes.ts";
 import { calendarRoutes } from "./features/calendar/routes.ts";
 import { programRoutes } from "./features/programs/routes.ts";
+import { placeRuleRoutes } from "./features/place-rules/routes.ts";
 import { staffDayRoutes } from "./features/staff-day/routes.ts";
 import { homeownerViewRoutes } from "./features/homeowner-view/routes.ts";
 import { unmatchedInboundRoutes } from "./features/unmatched-inbound/routes.ts";
@@ -44,6 +45,7 @@ export function collectRoutes(deps: AppDeps): RouteSpec[] {
     ...photoRoutes(deps),
     ...calendarRoutes(deps),
     ...programRoutes(deps.db),
+    ...placeRuleRoutes(deps.db),
     ...reminderRoutes(deps),
     ...preferencesRoutes(deps),
     ...smsWebhookRoutes(deps),

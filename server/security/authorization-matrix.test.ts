@@ -22,7 +22,7 @@ async function recordsOf(ref: string) {
 /**
  * Staff-only records whose path id is not a property, keyed "<path segment>:<param>". Each
  * is harmless to hit as a manager: the saved reply is a throwaway one (DELETE removes it),
- * the user is the manager themselves (deactivating the only manager answers 409), and the
+ * the place is a throwaway one too, the user is the manager themselves (deactivating the only manager answers 409), and the
  * question is Ruth's own, unassigned by the call.
  */
 const staffRecordIds: Record<string, number> = {};
@@ -39,11 +39,13 @@ async function makeStaffRecords() {
   const [reply] = await ctx.db("saved_replies").insert({ company_id: ruth!.company_id, title: `matrix ${Date.now()}`, body: "Hello {{firstName}}" }).returning<{ id: number }[]>("id");
   // A stranger's text, kept for managers; marking it handled twice is harmless.
   const [unmatched] = await ctx.db("unmatched_inbound").insert({ company_id: ruth!.company_id, channel: "sms", sender: "+13305550177", body: "matrix" }).returning<{ id: string }[]>("id");
+  // A throwaway place (DELETE removes it).
+  const [place] = await ctx.db("place_rules").insert({ company_id: ruth!.company_id, name: `matrix ${Date.now()}`, region: "ZZ", rules: JSON.stringify({ fertilizerBlackouts: [], phosphorus: "allowed" }) }).returning<{ id: number }[]>("id");
   const [batch] = await ctx.db("import_batches").insert({ company_id: ruth!.company_id, file_sha256: `matrix ${Date.now()}` }).returning<{ id: number }[]>("id");
   // Ruth's open question (asked in photoOf); assigning it to nobody changes nothing.
   const question = await ctx.db("messages").join("conversations", "conversations.id", "messages.conversation_id")
     .where({ "conversations.plan_id": records.own.planId, "messages.kind": "question" }).whereNull("messages.resolved_at").orderBy("messages.id").first<{ id: string }>("messages.id");
-  Object.assign(staffRecordIds, { "companies:companyId": ruth!.company_id, "questions:messageId": Number(question!.id), "follow-ups:id": followUp!.id, "customers:id": ruth!.id, "saved-replies:id": reply!.id, "team:userId": manager!.id, "visit-imports:batchId": batch!.id, "unmatched-inbound:id": Number(unmatched!.id) });
+  Object.assign(staffRecordIds, { "companies:companyId": ruth!.company_id, "questions:messageId": Number(question!.id), "follow-ups:id": followUp!.id, "customers:id": ruth!.id, "saved-replies:id": reply!.id, "team:userId": manager!.id, "visit-imports:batchId": batch!.id, "unmatched-inbound:id": Number(unmatched!.id), "place-rules:id": place!.id });
 }
 
 /** Each homeowner asks a question with one photo, so photo routes have a record of each. */

@@ -6,6 +6,7 @@ import { mowingSteps } from "./rules/mowing.ts";
 import { aerationCoreSteps, prepSteps } from "./rules/prep.ts";
 import { leafCleanupSteps, thatchCleanupSteps } from "./rules/seasonal.ts";
 import { nitrogenWarnings } from "./rules/nitrogen-warnings.ts";
+import { applyPlaceRules, placeRuleFindings } from "./rules/place-rules.ts";
 import { warningsForAudiences } from "./rules/audiences.ts";
 import { planWarnings } from "./rules/warnings.ts";
 import { wateringSteps } from "./rules/watering.ts";
@@ -63,7 +64,7 @@ function cautionsUsed(groups: readonly (readonly { cautions: readonly CautionId[
  */
 export function visitWarnings(input: PlanInput): PlanWarning[] {
   const ctx = buildContext(input);
-  return warningsForAudiences(ctx, [...planWarnings(ctx), ...warmSeasonWarnings(ctx)]);
+  return warningsForAudiences(ctx, [...planWarnings(ctx), ...warmSeasonWarnings(ctx), ...placeRuleFindings(ctx)]);
 }
 
 /**
@@ -79,7 +80,7 @@ export function generatePlan(input: PlanInput): Plan {
   const steps = sortSteps(
     fromToday(
       ctx,
-      applySkips(ctx, [
+      applySkips(ctx, applyPlaceRules(ctx, [
         ...thatchCleanupSteps(ctx),
         ...aerationCoreSteps(ctx),
         ...wateringSteps(ctx),
@@ -88,7 +89,7 @@ export function generatePlan(input: PlanInput): Plan {
         ...holdOffEndSteps(ctx, windows),
         ...leafCleanupSteps(ctx),
         ...checkInSteps(ctx),
-      ]),
+      ])),
     ),
   );
   const { timeline } = ctx;
@@ -109,7 +110,7 @@ export function generatePlan(input: PlanInput): Plan {
     prepSteps: prep,
     steps,
     holdOffs,
-    warnings: warningsForAudiences(ctx, [...planWarnings(ctx), ...nitrogenWarnings(ctx), ...warmSeasonWarnings(ctx)]),
+    warnings: warningsForAudiences(ctx, [...planWarnings(ctx), ...nitrogenWarnings(ctx), ...warmSeasonWarnings(ctx), ...placeRuleFindings(ctx)]),
     summary: calculatorSummary(ctx),
     cautions: cautionsUsed([prep, steps, holdOffs]),
   };

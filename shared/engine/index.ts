@@ -36,6 +36,20 @@ export {
   type PlanInputRaw,
 } from "./schemas/plan-input.ts";
 export {
+  placeRulesSchema,
+  blackoutWindowSchema,
+  wateringDaysSchema,
+  monthDaySchema,
+  isValidMonthDay,
+  PHOSPHORUS_RULES,
+  type PlaceRules,
+  type PlaceRulesInput,
+  type BlackoutWindow,
+  type WateringDays,
+  type PhosphorusRule,
+} from "./schemas/place-rules.ts";
+export { inFertilizerBlackout, weekdayOfDayNumber } from "./rules/place-rules.ts";
+export {
   programSettingsSchema,
   programSettingBounds,
   defaultProgramSettings,

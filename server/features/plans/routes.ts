@@ -14,7 +14,7 @@ const staff = ["technician", "manager"] as const;
 const everyone = ["customer", "technician", "manager"] as const;
 
 /** The preview takes the engine's own input; the engine's parser gives the field errors. */
-const previewBodySchema = z.object({ visit: z.unknown(), property: z.unknown(), program: z.unknown().optional(), options: z.unknown().optional() });
+const previewBodySchema = z.object({ visit: z.unknown(), property: z.unknown(), program: z.unknown().optional(), options: z.unknown().optional(), placeRules: z.unknown().optional() });
 
 export function planRoutes(deps: AppDeps, onChange?: PlanChangeHook): RouteSpec[] {
   const { db } = deps;

@@ -1,9 +1,10 @@
-import { generatePlan, homeownerWarnings, parsePlanInput, recomputePlan, type Observation, type Plan, type PlanInputRaw, type ProgramSettings } from "#shared/engine/index";
+import { generatePlan, homeownerWarnings, parsePlanInput, recomputePlan, type Observation, type PlaceRules, type Plan, type PlanInputRaw, type ProgramSettings } from "#shared/engine/index";
 import type { StoredPlan, TodayResponse } from "#shared/schemas/plans";
 import type { Db } from "../../db.ts";
 import { HttpError, notFound } from "../../http/errors.ts";
 import { localDateAt } from "../../lib/local-date.ts";
 import { loadVisitWithProperty, type VisitWithProperty } from "../visits/repo.ts";
+import { placeOfProperty } from "../place-rules/repo.ts";
 import type { SessionUser } from "../../auth/session-user.ts";
 import { currentProgram, programVersion } from "./program-repo.ts";
 import * as plans from "./plans-repo.ts";
@@ -15,13 +16,19 @@ import { maySee } from "./access.ts";
 /** Runs after every change to a plan's steps, inside the same transaction (e.g. to reschedule reminders). */
 export type PlanChangeHook = (trx: Db, planId: number) => Promise<void>;
 
-export function engineInput(visit: VisitWithProperty, program: ProgramSettings, options: PlanInputRaw["options"] = {}): PlanInputRaw {
+export function engineInput(visit: VisitWithProperty, program: ProgramSettings, options: PlanInputRaw["options"] = {}, placeRules?: PlaceRules): PlanInputRaw {
   return {
     visit: { date: visit.visitDate, services: visit.services, ...visit.details } as PlanInputRaw["visit"],
     property: { ...visit.lawn, timeZone: visit.timeZone } as PlanInputRaw["property"],
     program,
     options,
+    ...(placeRules ? { placeRules } : {}),
   };
+}
+
+/** The rules of the lawn's place as they are now: a regenerated plan follows today's rules. */
+function placeRulesOf(db: Db, visit: VisitWithProperty): Promise<PlaceRules | undefined> {
+  return placeOfProperty(db, visit.companyId, visit.region, visit.postalCode);
 }
 
 /** Validates an input assembled from stored records; a failure means the records need fixing, not the user's form. */
@@ -48,7 +55,8 @@ export async function createPlanForVisit(
   const visit = await loadVisitWithProperty(trx, visitId);
   if (!visit) throw notFound("That visit");
   const program = await currentProgram(trx, visit.companyId);
-  const raw = engineInput(visit, program, options.bookedAhead ? {} : { today: localDateAt(visit.timeZone) });
+  const placeRules = await placeRulesOf(trx, visit);
+  const raw = engineInput(visit, program, options.bookedAhead ? {} : { today: localDateAt(visit.timeZone) }, placeRules);
   const plan = generatePlan(parseStored(raw));
   const planId = await plans.insertPlan(trx, { propertyId: visit.propertyId, visitId, input: raw, plan });
   await steps.syncSteps(trx, planId, [...plan.prepSteps, ...plan.steps]);
@@ -71,7 +79,7 @@ export async function regeneratePlan(db: Db, planId: number, change: { observati
     const program = (await programVersion(trx, visit.companyId, locked.program_version)) ?? (await currentProgram(trx, visit.companyId));
     const observations = change.observation ? [...locked.observations, change.observation] : locked.observations;
     const today = localDateAt(visit.timeZone);
-    const raw = engineInput(visit, program, { today, observations });
+    const raw = engineInput(visit, program, { today, observations }, await placeRulesOf(trx, visit));
     const input = parseStored(raw);
     const previous = (await steps.stepsOfPlan(trx, planId)).map(steps.toEngineStep);
     const plan = recomputePlan({ steps: previous.filter((s) => s.phase !== "prep"), prepSteps: previous.filter((s) => s.phase === "prep") }, input, today);

@@ -15,6 +15,9 @@ export type VisitWithProperty = {
   details: VisitDetails;
   propertyId: number;
   timeZone: string;
+  /** State and postal code: they pick the company's place rules for the lawn. */
+  region: string;
+  postalCode: string;
   lawn: Record<string, unknown>;
   companyId: number;
 };
@@ -51,10 +54,10 @@ export async function loadVisitWithProperty(db: Db, visitId: number): Promise<Vi
     .where("service_visits.id", visitId)
     .first<{
       id: number; visit_date: string; services: string[]; details: VisitDetails;
-      property_id: number; time_zone: string; lawn: Record<string, unknown>; company_id: number;
+      property_id: number; time_zone: string; region: string; postal_code: string; lawn: Record<string, unknown>; company_id: number;
     } | undefined>(
       "service_visits.id", "service_visits.visit_date", "service_visits.services", "service_visits.details",
-      "properties.id as property_id", "properties.time_zone", "properties.lawn", "customers.company_id",
+      "properties.id as property_id", "properties.time_zone", "properties.region", "properties.postal_code", "properties.lawn", "customers.company_id",
     );
   if (!row) return undefined;
   return {
@@ -64,6 +67,8 @@ export async function loadVisitWithProperty(db: Db, visitId: number): Promise<Vi
     details: row.details,
     propertyId: row.property_id,
     timeZone: row.time_zone,
+    region: row.region,
+    postalCode: row.postal_code,
     lawn: row.lawn,
     companyId: row.company_id,
   };

@@ -1,6 +1,7 @@
 import type { PlanContext } from "../context.ts";
 import type { PlanWarning, WarningFinding, WarningSeverity } from "../types.ts";
 import { WARM_SEASON_HOMEOWNER } from "./warm-season.ts";
+import { newLawnWateringForHomeowner } from "./place-rules.ts";
 
 type HomeownerWording = Pick<WarningFinding, "message" | "reason"> & { severity: WarningSeverity };
 
@@ -49,6 +50,10 @@ const HOMEOWNER: Partial<Record<string, (ctx: PlanContext, finding: WarningFindi
     message: "This kind of grass comes up slowly and unevenly from seed, so the dates in your plan are estimates. Keep watering as planned.",
     reason: "Few lawns are grown from this seed, so its sprouting times are rougher than for common grasses.",
   }),
+  watering_days_limit_new_lawn: (ctx) => {
+    const wording = newLawnWateringForHomeowner(ctx);
+    return wording ? { severity: "caution", ...wording } : null;
+  },
   no_sprinkler_for_seed: (_ctx, finding) => ({
     severity: "caution",
     message: "Without a sprinkler the seed has to be kept damp by hand several times a day. A hose-end sprinkler on a timer makes that much easier.",

@@ -2,6 +2,7 @@ import { z } from "zod";
 import { isValidIsoDate, toDayNumber } from "../dates.ts";
 import { SPRINKLER_TYPES } from "../tables/sprinklers.ts";
 import { isoDateSchema, localTimeSchema, speciesSchema, timeZoneSchema } from "./common.ts";
+import { placeRulesSchema } from "./place-rules.ts";
 import { programSettingsSchema } from "./program-settings.ts";
 
 export const SERVICES = [
@@ -54,6 +55,8 @@ export const visitSchema = z
     seedRateLbPer1000: z.number().gt(0, "Must be more than 0").max(50, "Must be at most 50 lb per 1,000 ft²").optional(),
     areaFt2: z.number().gt(0, "Must be more than 0").max(5_000_000, "Must be at most 5,000,000 ft²"),
     products: z.array(productAppliedSchema).max(10).default([]),
+    /** A soil test showed the lawn needs phosphorus: a reason places that limit phosphorus accept. */
+    soilTestCallsForPhosphorus: z.boolean().optional(),
   })
   .superRefine((visit, ctx) => {
     // Cross-field checks run even when single fields failed; guard the shapes.
@@ -143,6 +146,8 @@ export const planInputSchema = z
     property: propertySchema,
     program: programSettingsSchema.prefault({}),
     options: planOptionsSchema.prefault({}),
+    /** The rules of the place the lawn is in, as its company entered them; absent: none. */
+    placeRules: placeRulesSchema.optional(),
   })
   .superRefine((input, ctx) => {
     // zod still runs this when other fields failed, so only compare real dates.

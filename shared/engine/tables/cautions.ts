@@ -11,6 +11,7 @@ export const CAUTION_IDS = [
   "watering_restrictions",
   "equipment_safety",
   "licensed_applicator",
+  "local_ordinances",
 ] as const;
 export type CautionId = (typeof CAUTION_IDS)[number];
 
@@ -52,5 +53,9 @@ export const CAUTIONS: Readonly<Record<CautionId, Caution>> = {
   licensed_applicator: tradeCaution(
     "licensed_applicator",
     "Where local rules require it, regulated products are applied and recorded by a licensed applicator.",
+  ),
+  local_ordinances: tradeCaution(
+    "local_ordinances",
+    "Your state, county, town and water utility set the rules for feeding and watering. This plan follows the rules your lawn-care company entered; where the local rules say otherwise, they win.",
   ),
 };

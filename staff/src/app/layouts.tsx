@@ -38,6 +38,8 @@ export function StaffLayout() {
     { to: "/visits/new", label: "Log a visit" },
     { to: "/customers", label: "Customers" },
     { to: "/plan-preview", label: "Plan preview" },
+    // Managers edit the rules; technicians read what applies where they work.
+    { to: "/places", label: "Places" },
   ];
   if (user?.role === "manager") nav.push(...managerNav);
   if (outboxAvailable) nav.push({ to: "/outbox", label: "Outbox (development)" });

@@ -54,6 +54,7 @@ export const router = createBrowserRouter(
                 },
                 { path: "visits/new", lazy: () => import("../features/visit-log/visit-log-route.tsx").then((m) => ({ Component: m.VisitLogRoute })) },
                 { path: "customers", lazy: () => import("../features/customers/customers-route.tsx").then((m) => ({ Component: m.CustomersRoute })) },
+                { path: "places", lazy: () => import("../features/places/places-route.tsx").then((m) => ({ Component: m.PlacesRoute })) },
                 { path: "customers/:customerId", lazy: () => import("../features/customers/customer-route.tsx").then((m) => ({ Component: m.CustomerRoute })) },
                 {
                   path: "plans/:planId/as-homeowner",

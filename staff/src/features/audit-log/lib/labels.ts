@@ -14,6 +14,9 @@ const actionLabels: Record<string, string> = {
   "follow_up.updated": "Changed a follow-up visit",
   "unmatched_inbound.read": "Read the unmatched messages",
   "unmatched_inbound.handled": "Marked an unmatched message handled",
+  "place.created": "Added a place's rules",
+  "place.updated": "Changed a place's rules",
+  "place.deleted": "Deleted a place's rules",
 };
 export const actionLabel = (action: string) => actionLabels[action] ?? action;
 
@@ -24,8 +27,9 @@ export const subjectTypes = [
   { value: "visit", label: "Visits" },
   { value: "follow_up", label: "Follow-up visits" },
   { value: "customers", label: "Imports" },
+  { value: "place", label: "Places" },
 ];
-const subjectNames: Record<string, string> = { plan: "Care plan", customer: "Customer", property: "Lawn", visit: "Visit", follow_up: "Follow-up", customers: "Import" };
+const subjectNames: Record<string, string> = { plan: "Care plan", customer: "Customer", property: "Lawn", visit: "Visit", follow_up: "Follow-up", customers: "Import", place: "Place" };
 export const subjectName = (type: string | null) => (type ? (subjectNames[type] ?? type) : "");
 
 const when = new Intl.DateTimeFormat(undefined, { dateStyle: "medium", timeStyle: "short" });

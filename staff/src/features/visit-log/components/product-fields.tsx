@@ -12,7 +12,7 @@ const MAX_PRODUCTS = 10;
 
 /** Fertiliser and other granular products from the bag, with the amount and whole bags for this lawn. */
 export function ProductFields() {
-  const { control } = useFormContext<VisitFormValues>();
+  const { control, register } = useFormContext<VisitFormValues>();
   const { fields, append, remove } = useFieldArray({ control, name: "visit.products" });
   return (
     <FormSection legend="Products applied">
@@ -24,6 +24,14 @@ export function ProductFields() {
         <Button variant="secondary" className="self-start" onClick={() => append(emptyProductRow())}>
           Add a product
         </Button>
+      )}
+      {fields.length > 0 && (
+        <CheckboxField
+          label="A soil test shows this lawn needs phosphorus"
+          hint="Where a place allows phosphorus only with a reason, this is one (new seeding is the other)."
+          className="font-normal"
+          {...register("visit.soilTestCallsForPhosphorus")}
+        />
       )}
     </FormSection>
   );

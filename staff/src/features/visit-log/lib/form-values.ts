@@ -50,6 +50,8 @@ export interface VisitFormValues {
     seedRateLbPer1000: string;
     areaFt2: string;
     products: ProductRow[];
+    /** A soil test shows the lawn needs phosphorus: places that limit phosphorus accept it as a reason. */
+    soilTestCallsForPhosphorus?: boolean;
   };
   seedBagLb: string;
   conditions: { temperatureF: string; windMph: string; windDirection: string };

@@ -106,6 +106,7 @@ export function checkVisitForm(values: VisitFormValues): CheckedVisit {
       seedRateLbPer1000: number("visit.seedRateLbPer1000", v.seedRateLbPer1000, false),
       areaFt2: number("visit.areaFt2", v.areaFt2, true),
       products,
+      ...(v.soilTestCallsForPhosphorus ? { soilTestCallsForPhosphorus: true } : {}),
     },
     conditions,
     applicationRecord,

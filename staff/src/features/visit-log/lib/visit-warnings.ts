@@ -46,6 +46,7 @@ export function warningsForVisit(values: VisitFormValues, property: PropertyDeta
           rateLbPer1000: figure(row.rateLbPer1000),
           quickReleaseN: row.quickReleaseN,
         })),
+        ...(v.soilTestCallsForPhosphorus ? { soilTestCallsForPhosphorus: true } : {}),
       },
       property: { ...property.lawn, timeZone: property.timeZone },
     };
