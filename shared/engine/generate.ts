@@ -9,6 +9,8 @@ import { nitrogenWarnings } from "./rules/nitrogen-warnings.ts";
 import { warningsForAudiences } from "./rules/audiences.ts";
 import { planWarnings } from "./rules/warnings.ts";
 import { wateringSteps } from "./rules/watering.ts";
+import { frozenGroundWatering, seasonFeedCutoff } from "./rules/season.ts";
+import { dormantSeedingSteps } from "./rules/season-advice.ts";
 import { hashInput } from "./hash.ts";
 import type { PlanInput } from "./schemas/plan-input.ts";
 import { sortSteps } from "./steps.ts";
@@ -17,7 +19,16 @@ import { CAUTION_IDS, CAUTIONS, type CautionId } from "./tables/cautions.ts";
 import type { HoldOff, PhaseRange, Plan, PlanStep, PlanWarning } from "./types.ts";
 
 /** Bump when the same input would produce a different plan, so stored plans can be told apart. */
-export const ENGINE_VERSION = 2;
+export const ENGINE_VERSION = 3;
+
+/*
+ * Post-passes every step goes through, whichever rule made it: no watering on cold or frozen
+ * ground, no feeding after the season's cut-off. Rules that add feeding or watering (a fall
+ * feeding program, company blackout dates…) chain their own pass here.
+ */
+function seasonPasses(ctx: PlanContext, steps: PlanStep[]): PlanStep[] {
+  return seasonFeedCutoff(ctx, frozenGroundWatering(ctx, steps));
+}
 
 /** Steps the homeowner reported skipping keep their place in the plan, marked skipped. */
 function applySkips(ctx: PlanContext, steps: PlanStep[]): PlanStep[] {
@@ -78,16 +89,20 @@ export function generatePlan(input: PlanInput): Plan {
   const steps = sortSteps(
     fromToday(
       ctx,
-      applySkips(ctx, [
-        ...thatchCleanupSteps(ctx),
-        ...aerationCoreSteps(ctx),
-        ...wateringSteps(ctx),
-        ...mowingSteps(ctx),
-        ...feedingSteps(ctx, windows),
-        ...holdOffEndSteps(ctx, windows),
-        ...leafCleanupSteps(ctx),
-        ...checkInSteps(ctx),
-      ]),
+      applySkips(
+        ctx,
+        seasonPasses(ctx, [
+          ...thatchCleanupSteps(ctx),
+          ...aerationCoreSteps(ctx),
+          ...wateringSteps(ctx),
+          ...mowingSteps(ctx),
+          ...feedingSteps(ctx, windows),
+          ...holdOffEndSteps(ctx, windows),
+          ...leafCleanupSteps(ctx),
+          ...checkInSteps(ctx),
+          ...dormantSeedingSteps(ctx),
+        ]),
+      ),
     ),
   );
   const { timeline } = ctx;
@@ -104,6 +119,7 @@ export function generatePlan(input: PlanInput): Plan {
       firstMowDate: timeline.firstMow === null ? null : ctx.dateOf(timeline.firstMow),
       germinationWateringEnds: timeline.germinationEnd === null ? null : ctx.dateOf(timeline.germinationEnd),
       planEnds: ctx.dateOf(timeline.planEnd),
+      season: ctx.season.check,
     },
     prepSteps: prep,
     steps,

@@ -1,5 +1,6 @@
 import type { PlanContext } from "../context.ts";
 import type { PlanWarning, WarningFinding, WarningSeverity } from "../types.ts";
+import { SEASON_HOMEOWNER } from "./season-advice.ts";
 
 type HomeownerWording = Pick<WarningFinding, "message" | "reason"> & { severity: WarningSeverity };
 
@@ -53,6 +54,7 @@ const HOMEOWNER: Partial<Record<string, (ctx: PlanContext, finding: WarningFindi
     message: "Without a sprinkler the seed has to be kept damp by hand several times a day. A hose-end sprinkler on a timer makes that much easier.",
     reason: finding.reason,
   }),
+  ...SEASON_HOMEOWNER,
 };
 
 /** The plan's warnings: every finding for the crew, then the homeowner versions (sources kept). */
