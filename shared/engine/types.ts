@@ -163,6 +163,10 @@ export interface SeasonCheck {
   readonly soilWarms: IsoDate | null;
   /** Seed lying dormant: the day the plan expects it to start growing. */
   readonly sowingStarts: IsoDate | null;
+  /** Cold or frozen ground from this winter to next spring, and the next: no watering (inclusive dates). */
+  readonly noWatering: readonly { readonly start: IsoDate; readonly end: IsoDate }[];
+  /** The season's feeding cut-off until spring, this year and next: no feeding (inclusive dates). */
+  readonly noFeeding: readonly { readonly start: IsoDate; readonly end: IsoDate }[];
 }
 
 export interface PlanMeta {

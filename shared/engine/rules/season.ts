@@ -84,12 +84,14 @@ function seasonAround(day: number, hemisphere: Hemisphere, family: Season, given
   let springYear = civilFromDays(day).year + 1;
   while (springOf(springYear) > day) springYear--;
   const spring = springOf(springYear);
-  const nextSpring = springOf(springYear + 1);
   let frostYear = springYear - 1;
   while (frostOf(frostYear) <= spring) frostYear++;
   let frost = frostOf(frostYear);
-  if (given !== null && given > spring && given < nextSpring) frost = given;
-  return { spring, frost, nextSpring };
+  if (given !== null && given > spring && given < springOf(springYear + 1)) frost = given;
+  // An entered frost far from the hemisphere's usual date still gets its cold season before spring.
+  let nextYear = springYear + 1;
+  while (springOf(nextYear) <= frost + COLD_SOIL_RULE.daysAfterFirstFrost) nextYear++;
+  return { spring, frost, nextSpring: springOf(nextYear) };
 }
 
 function periodOf(day: number, b: SeasonBounds): SeasonPeriod {
@@ -114,7 +116,7 @@ interface Verdict {
   readonly waitsForSpring: boolean;
 }
 
-function verdictOf(work: SeasonWork, lawnFamily: Season, day: number, b: SeasonBounds): Verdict {
+function verdictOf(work: SeasonWork, family: Season, day: number, b: SeasonBounds): Verdict {
   const cold = b.frost + COLD_SOIL_RULE.daysAfterFirstFrost;
   if (work === "winter_overseeding") {
     const from = b.frost - WINTER_RYEGRASS_WINDOW.fromDaysBeforeFrost;
@@ -123,7 +125,7 @@ function verdictOf(work: SeasonWork, lawnFamily: Season, day: number, b: SeasonB
     if (day < from) return { verdict: "early", window, waitsForSpring: false };
     return { verdict: day <= to ? "in_window" : "late", window, waitsForSpring: false };
   }
-  if (work === "seeding" && lawnFamily === "cool") {
+  if (work === "seeding" && family === "cool") {
     const window = { from: b.frost - COOL_SEEDING_WINDOW.fromDaysBeforeFrost, to: b.frost - COOL_SEEDING_WINDOW.untilDaysBeforeFrost };
     if (day >= cold) return { verdict: "dormant_seeding", window, waitsForSpring: true };
     if (day > window.to) return { verdict: "late", window, waitsForSpring: false };
@@ -139,7 +141,7 @@ function verdictOf(work: SeasonWork, lawnFamily: Season, day: number, b: SeasonB
   }
   // Cold ground with spring close: the work is early for next season rather than late for this one.
   const springNear = day >= cold && b.nextSpring - day <= WARM_SEEDING_WINDOW.earlyWithinDays;
-  if (lawnFamily === "cool") {
+  if (family === "cool") {
     const fallFrom = b.frost - CARE_WINDOW.coolFallFromDaysBeforeFrost;
     if (springNear) return { verdict: "early", window: null, waitsForSpring: false };
     if (day >= cold) return { verdict: "late", window: { from: fallFrom, to: cold - 1 }, waitsForSpring: false };
@@ -164,12 +166,26 @@ const FROST_FREE_CHECK = (work: SeasonWork, family: Season): SeasonCheck => ({
   window: null,
   soilWarms: null,
   sowingStarts: null,
+  noWatering: [],
+  noFeeding: [],
 });
 
-/** Days `[from, to)` before the horizon, as visit offsets. */
+/** Closed days `[start, end)` as visit offsets; overlapping ones (an entered frost far from the usual date) merged. */
 function closedRanges(starts: readonly number[], ends: readonly number[], visitDay: number): DayRange[] {
-  return starts.map((from, i) => ({ from: from - visitDay, to: (ends[i] ?? from) - visitDay })).filter((r) => r.to > r.from);
+  const ranges = starts
+    .map((from, i) => ({ from: from - visitDay, to: (ends[i] ?? from) - visitDay }))
+    .filter((r) => r.to > r.from)
+    .sort((a, b) => a.from - b.from);
+  const merged: DayRange[] = [];
+  for (const r of ranges) {
+    const last = merged[merged.length - 1];
+    if (last && r.from <= last.to) merged[merged.length - 1] = { from: last.from, to: Math.max(last.to, r.to) };
+    else merged.push(r);
+  }
+  return merged;
 }
+
+const datesOf = (r: DayRange, visitDay: number) => ({ start: fromDayNumber(visitDay + r.from), end: fromDayNumber(visitDay + r.to - 1) });
 
 export function seasonOf(
   input: PlanInput,
@@ -184,23 +200,21 @@ export function seasonOf(
   if (given === null && FROST_FREE_ZONES.has(input.property.timeZone)) {
     return { check: FROST_FREE_CHECK(work, family), frostDay: null, sowingStartDay: 0, wateringClosed: [], feedingClosed: [] };
   }
-  // The lawn's own family sets when it grows (watering, warm-season nitrogen); the seed's when it sprouts.
-  const lawnFamily: Season = work === "care" ? family : lawnSeason === "warm" ? "warm" : family;
   const bounds = seasonAround(visitDay, hemisphere, family, given);
   const verdict = verdictOf(work, family, visitDay, bounds);
   const sowingStartDay = verdict.waitsForSpring ? bounds.nextSpring - visitDay : 0;
   // The frost that ends the growing days the plan works in: next season's when the seed waits for spring.
   const growing = verdict.waitsForSpring ? seasonAround(bounds.nextSpring, hemisphere, family, given) : bounds;
 
-  // Closed days this winter and next, for the lawn's family (a ryegrass-overseeded warm lawn grows in winter: cool rules).
-  const waterFamily: Season = work === "winter_overseeding" ? "cool" : lawnFamily;
-  const lawnNow = waterFamily === family ? bounds : seasonAround(visitDay, hemisphere, waterFamily, given);
-  const lawnNext = seasonAround(lawnNow.nextSpring, hemisphere, waterFamily, given);
+  // Closed days this winter and next, for the family judged: the new grass's when seeding (a
+  // ryegrass-overseeded warm lawn grows in winter: cool rules), the lawn's otherwise.
+  const now = bounds;
+  const next = seasonAround(now.nextSpring, hemisphere, family, given);
   const coldFrom = (b: SeasonBounds) => b.frost + COLD_SOIL_RULE.daysAfterFirstFrost;
   const feedFrom = (b: SeasonBounds) =>
-    waterFamily === "warm" ? b.frost - WARM_NITROGEN_CUTOFF.daysBeforeFirstFrost : coldFrom(b);
-  const wateringClosed = closedRanges([coldFrom(lawnNow), coldFrom(lawnNext)], [lawnNow.nextSpring, lawnNext.nextSpring], visitDay);
-  const feedingClosed = closedRanges([feedFrom(lawnNow), feedFrom(lawnNext)], [lawnNow.nextSpring, lawnNext.nextSpring], visitDay);
+    family === "warm" ? b.frost - WARM_NITROGEN_CUTOFF.daysBeforeFirstFrost : coldFrom(b);
+  const wateringClosed = closedRanges([coldFrom(now), coldFrom(next)], [now.nextSpring, next.nextSpring], visitDay);
+  const feedingClosed = closedRanges([feedFrom(now), feedFrom(next)], [now.nextSpring, next.nextSpring], visitDay);
 
   return {
     check: {
@@ -213,6 +227,8 @@ export function seasonOf(
       window: verdict.window ? { start: fromDayNumber(verdict.window.from), end: fromDayNumber(verdict.window.to) } : null,
       soilWarms: fromDayNumber(bounds.nextSpring),
       sowingStarts: verdict.waitsForSpring ? fromDayNumber(bounds.nextSpring) : null,
+      noWatering: wateringClosed.map((r) => datesOf(r, visitDay)),
+      noFeeding: feedingClosed.map((r) => datesOf(r, visitDay)),
     },
     frostDay: growing.frost - visitDay,
     sowingStartDay,

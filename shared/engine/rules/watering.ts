@@ -270,9 +270,12 @@ export function wateringSteps(ctx: PlanContext): PlanStep[] {
   } else {
     const feeding = ctx.services.has("fertiliser_only") || ctx.services.has("starter_fertiliser");
     const amount = ctx.input.property.irrigation.kind === "none" ? "" : `, ${maturing.minutes} minutes ${wherePhrase(ctx)}`;
-    push(0, () =>
-      deepStep(ctx, 0, maturing, deepStart, `${feeding ? "Water the fertilizer in today" : "Water the lawn deeply today"}${amount}`),
-    );
+    // Not once the frost has come: the lawn has stopped using water, and rain or snow does the job.
+    if (stopDay >= 0) {
+      push(0, () =>
+        deepStep(ctx, 0, maturing, deepStart, `${feeding ? "Water the fertilizer in today" : "Water the lawn deeply today"}${amount}`),
+      );
+    }
     for (const day of deepWateringDays(3, Math.min(timeline.establishmentEnd, stopDay), program.maturingWateringsPerWeek)) {
       push(day, () => deepStep(ctx, day, maturing, deepStart));
     }

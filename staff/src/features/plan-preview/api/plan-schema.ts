@@ -79,6 +79,8 @@ export const planSchema: z.ZodType<Plan> = z.object({
         window: z.object({ start: isoDate, end: isoDate }).nullable(),
         soilWarms: isoDate.nullable(),
         sowingStarts: isoDate.nullable(),
+        noWatering: z.array(z.object({ start: isoDate, end: isoDate })),
+        noFeeding: z.array(z.object({ start: isoDate, end: isoDate })),
       })
       .optional(),
     recomputedOn: isoDate.optional(),
