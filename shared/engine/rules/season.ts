@@ -88,10 +88,9 @@ function seasonAround(day: number, hemisphere: Hemisphere, family: Season, given
   while (frostOf(frostYear) <= spring) frostYear++;
   let frost = frostOf(frostYear);
   if (given !== null && given > spring && given < springOf(springYear + 1)) frost = given;
-  // An entered frost far from the hemisphere's usual date still gets its cold season before spring.
-  let nextYear = springYear + 1;
-  while (springOf(nextYear) <= frost + COLD_SOIL_RULE.daysAfterFirstFrost) nextYear++;
-  return { spring, frost, nextSpring: springOf(nextYear) };
+  // An entered frost far later than the hemisphere's usual date (a mild place) still gets a short cold season.
+  const shortestSpring = frost + COLD_SOIL_RULE.daysAfterFirstFrost + COLD_SOIL_RULE.shortestColdDays;
+  return { spring, frost, nextSpring: Math.max(springOf(springYear + 1), shortestSpring) };
 }
 
 function periodOf(day: number, b: SeasonBounds): SeasonPeriod {

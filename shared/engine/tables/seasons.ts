@@ -84,6 +84,8 @@ export const CLIMATE_SHIFT_RULE = {
  */
 export const COLD_SOIL_RULE = {
   daysAfterFirstFrost: 14,
+  /** A frost entered far later than usual still gets this much cold season before spring (Sproutline choice). */
+  shortestColdDays: 30,
   source: `${SOURCES.tradePractice} (no nitrogen on frozen or snow-covered ground; dormant seeding)`,
   provenance: "common practice",
 } as const satisfies Sourced & Record<string, unknown>;
