@@ -241,20 +241,28 @@ export const inRanges = (day: number, ranges: readonly DayRange[]): DayRange | n
   return null;
 };
 
+/** Index of the closed range (inclusive ISO dates) holding `date`, or -1: ISO dates compare as text, no parsing per step. */
+function closedIndex(date: string, ranges: SeasonCheck["noWatering"]): number {
+  for (let i = 0; i < ranges.length; i++) {
+    const r = ranges[i]!;
+    if (date >= r.start && date <= r.end) return i;
+  }
+  return -1;
+}
+
 /**
  * Post-pass over every water step (and the rain notes standing in for them): none on cold or
  * frozen ground, whatever rule made it. Chain after any rule that adds watering.
  */
-export function frozenGroundWatering(ctx: PlanContext, steps: readonly PlanStep[]): PlanStep[] {
-  const closed = ctx.season.wateringClosed;
-  if (closed.length === 0) return [...steps];
+export function frozenGroundWatering(ctx: PlanContext, steps: PlanStep[]): PlanStep[] {
+  const closed = ctx.season.check.noWatering;
+  if (closed.length === 0) return steps;
   const out: PlanStep[] = [];
   let firstCut: number | null = null;
   for (const s of steps) {
-    const isWatering = s.kind === "water" || s.key.endsWith(":rain");
-    const range = isWatering ? inRanges(toDayNumber(s.date) - ctx.visitDay, closed) : null;
-    if (range === null) out.push(s);
-    else if (s.kind === "water" && firstCut === null) firstCut = Math.max(0, range.from);
+    const i = s.kind === "water" || (s.kind === "note" && s.key.endsWith(":rain")) ? closedIndex(s.date, closed) : -1;
+    if (i === -1) out.push(s);
+    else if (s.kind === "water" && firstCut === null) firstCut = Math.max(0, ctx.season.wateringClosed[i]!.from);
   }
   if (firstCut !== null) out.push(coldGroundStopNote(ctx, firstCut));
   return out;
@@ -268,18 +276,19 @@ const MOVED_TO_SPRING = " Moved to when the grass is growing again: no feeding o
  * reopens when the plan still runs then; a dated one is dropped. Chain after every rule that
  * adds feeding (fall program, blackout dates…).
  */
-export function seasonFeedCutoff(ctx: PlanContext, steps: readonly PlanStep[]): PlanStep[] {
-  const closed = ctx.season.feedingClosed;
-  if (closed.length === 0) return [...steps];
+export function seasonFeedCutoff(ctx: PlanContext, steps: PlanStep[]): PlanStep[] {
+  const closed = ctx.season.check.noFeeding;
+  if (closed.length === 0) return steps;
   const out: PlanStep[] = [];
   for (const s of steps) {
-    const range = s.kind === "feed" ? inRanges(toDayNumber(s.date) - ctx.visitDay, closed) : null;
-    if (range === null) {
+    const i = s.kind === "feed" ? closedIndex(s.date, closed) : -1;
+    if (i === -1) {
       out.push(s);
       continue;
     }
-    if (dateOfKey(s.key) === null && range.to <= ctx.timeline.planEnd) {
-      out.push({ ...s, date: ctx.dateOf(range.to), phase: ctx.phaseOf(range.to), detail: s.detail + MOVED_TO_SPRING });
+    const reopen = ctx.season.feedingClosed[i]!.to;
+    if (dateOfKey(s.key) === null && reopen <= ctx.timeline.planEnd) {
+      out.push({ ...s, date: ctx.dateOf(reopen), phase: ctx.phaseOf(reopen), detail: s.detail + MOVED_TO_SPRING });
     }
   }
   return out;
