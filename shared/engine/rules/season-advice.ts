@@ -47,12 +47,12 @@ const TEXT = {
   seedingLateHomeowner: "It is late in the year for new grass. Follow the watering in your plan while it lasts; in spring, send us a photo of any thin or bare spots so we can take a look.",
   seedingLateHomeownerReason: "Some seed sown late only sprouts once the soil warms again in spring.",
   dormant: (spring: string) =>
-    `Dormant seeding: the soil is too cold for seed to sprout. No germination watering, mowing or feeding until the soil warms (about ${spring}); germination is expected then. Good seed-to-soil contact matters, and some seed is lost to birds and washing over winter.`,
+    `Dormant seeding: the soil is too cold for seed to sprout. No germination watering, mowing or feeding until the soil warms (about ${spring}); germination is expected then, so the hold-offs (crabgrass preventers included) count from then. Good seed-to-soil contact matters, and some seed is lost to birds and washing over winter.`,
   dormantWarm: (spring: string) =>
     `Warm-season seed sown on cold soil waits until the soil is about 65–70 °F (about ${spring}); this seed is normally sown in late spring, and more of it is lost over winter.`,
   dormantReason: "Seed sown on cold soil lies dormant and sprouts when the soil warms in spring.",
   dormantHomeowner: (spring: string) =>
-    `The seed sown today rests over the winter and sprouts when the soil warms, around ${spring}. There is nothing to water until then; your plan picks up in spring.`,
+    `The seed sown today rests over the winter and sprouts when the soil warms, around ${spring}. There is nothing to water until then; your plan picks up in spring. Don't spread a crabgrass preventer or weed-and-feed on the seeded areas in spring: it would stop the seed too.`,
   dormantHomeownerReason: "Seed on cold soil waits for spring; watering it now would not help and can freeze.",
   winterRyegrassEarly: (start: string) =>
     `Ryegrass sown while the warm-season lawn is still growing strongly is crowded out by it. About 3–4 weeks before the first frost (from about ${start}) is the usual time.`,

@@ -110,6 +110,13 @@ describe("dormant seeding", () => {
     expect(homeowner?.message).toMatch(/April 1/);
   });
 
+  it("the crabgrass-preventer hold-off counts from the soil warming, so it covers the spring the seed sprouts in (label intervals 8–16 weeks, from memory)", () => {
+    const plan = planFor(december);
+    // Program default 112 days after April 1, 2027.
+    expect(plan.holdOffs.find((h) => h.kind === "crabgrass_pre_emergent")?.end).toBe(addDays("2027-04-01", 112));
+    expect(plan.warnings.find((w) => w.code === "dormant_seeding" && w.audience === "homeowner")?.message).toMatch(/crabgrass preventer/);
+  });
+
   it("photo check-ins count from the soil warming, not from the visit", () => {
     const checkIns = planFor(december).steps.filter((s) => s.kind === "check_in_photo").map((s) => s.date);
     // Tall fescue: first sprouts day 7 and slowest up by day 14 (+3): April 8 and April 18.

@@ -29,6 +29,9 @@ import type { PlanStep, SeasonCheck, SeasonPeriod, SeasonVerdict, SeasonWork } f
  * first frost F and from the spring day S the soil has warmed (tables/seasons.ts).
  */
 
+/** Added to a feeding moved past the season's cut-off. */
+const MOVED_TO_SPRING = " Moved to when the grass is growing again: no feeding on cold or frozen ground.";
+
 /** Days [from, to) as offsets from the visit. */
 export interface DayRange {
   readonly from: number;
@@ -267,8 +270,6 @@ export function frozenGroundWatering(ctx: PlanContext, steps: PlanStep[]): PlanS
   if (firstCut !== null) out.push(coldGroundStopNote(ctx, firstCut));
   return out;
 }
-
-const MOVED_TO_SPRING = " Moved to when the grass is growing again: no feeding on cold or frozen ground.";
 
 /**
  * Post-pass over every feed step: none from the season's cut-off until spring (cold or frozen
