@@ -7,6 +7,7 @@ import { SPECIES_FACTS, type Season } from "./tables/species.ts";
 import { HOSE_END_DEFAULT, SPRINKLER_DEFAULTS, type SprinklerDefault } from "./tables/sprinklers.ts";
 import { hemisphereOfZone, type Hemisphere } from "./tables/timing.ts";
 import { computeTimeline, phaseOfDay, type Timeline } from "./timeline.ts";
+import { seasonOf, type SeasonFacts } from "./rules/season.ts";
 import type { Phase } from "./types.ts";
 import { zoneClock, type ZoneClock } from "./zone-time.ts";
 
@@ -29,7 +30,14 @@ export interface PlanContext {
   readonly rainDays: ReadonlySet<number>;
   readonly skippedKeys: ReadonlySet<string>;
   readonly sproutsSeenDay: number | null;
+  /**
+   * The first frost that ends the plan's growing days, as an offset from the visit: entered or the
+   * hemisphere's default (null only in frost-free places); negative once it has passed; next
+   * season's when seed lies dormant until spring.
+   */
   readonly frostDay: number | null;
+  /** The season check, worked out once per plan (rules/season.ts). */
+  readonly season: SeasonFacts;
   readonly timeline: Timeline;
   /** DST gaps of the zone over the plan's dates, for checking watering times. */
   readonly clock: ZoneClock;
@@ -73,23 +81,27 @@ export function buildContext(input: PlanInput): PlanContext {
     }
   }
 
-  const base = computeTimeline(program, mix, { sproutsSeenDay, skippedGerminationWateringDays: 0 });
+  const hemisphere = property.hemisphere ?? hemisphereOfZone(property.timeZone);
+  const lawnSeason = lawnSeasonOf(input);
+  const season = seasonOf(input, visitDay, hemisphere, lawnSeason, seeding, mix);
+  const start = season.sowingStartDay;
+  const base = computeTimeline(program, mix, { sproutsSeenDay, skippedGerminationWateringDays: 0 }, start);
   const skippedGerminationWateringDays = countSkippedWateringDays(skippedKeys, visitDay, base.germinationEnd);
   const timeline =
     skippedGerminationWateringDays === 0
       ? base
-      : computeTimeline(program, mix, { sproutsSeenDay, skippedGerminationWateringDays });
+      : computeTimeline(program, mix, { sproutsSeenDay, skippedGerminationWateringDays }, start);
 
   return {
     input,
     program,
     visitDay,
     zone: property.timeZone,
-    hemisphere: property.hemisphere ?? hemisphereOfZone(property.timeZone),
+    hemisphere,
     services,
     seeding,
     mix,
-    lawnSeason: lawnSeasonOf(input),
+    lawnSeason,
     precipitationRate:
       property.irrigation.precipitationRateInPerHour ?? sprinklerDefault?.assumedInPerHour ?? program.defaultPrecipitationRateInPerHour,
     precipitationRateMeasured: property.irrigation.precipitationRateInPerHour !== undefined,
@@ -97,7 +109,8 @@ export function buildContext(input: PlanInput): PlanContext {
     rainDays,
     skippedKeys,
     sproutsSeenDay,
-    frostDay: property.expectedFirstFrost ? toDayNumber(property.expectedFirstFrost) - visitDay : null,
+    frostDay: season.frostDay,
+    season,
     timeline,
     clock: zoneClock(property.timeZone, visitDay, visitDay + timeline.planEnd),
     dateOf: (dayOffset) => fromDayNumber(visitDay + dayOffset),

@@ -1,6 +1,6 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { formatInches, formatNumber } from "./format.ts";
+import { formatDate, formatInches, formatNumber } from "./format.ts";
 
 describe("homeowner number formatting", () => {
   it("groups thousands and trims trailing zeros: 6,000 ft², 21.4 lb, 2.5 in", () => {
@@ -20,5 +20,10 @@ describe("homeowner number formatting", () => {
         );
       }),
     );
+  });
+
+  it("writes dates month first, as US readers expect, whatever the host's locale", () => {
+    expect(formatDate("2027-04-01")).toBe("April 1");
+    expect(formatDate("2026-10-15")).toBe("October 15");
   });
 });

@@ -28,3 +28,11 @@ export function formatNumber(value: number, decimals = 1): string {
 export function plural(count: number, one: string, many: string): string {
   return count === 1 ? one : many;
 }
+
+const MONTHS = ["January", "February", "March", "April", "May", "June", "July", "August", "September", "October", "November", "December"];
+
+/** "October 15": month first as US readers expect, without Intl so it never depends on the host. */
+export function formatDate(date: string): string {
+  const month = Number(date.slice(5, 7));
+  return `${MONTHS[month - 1] ?? ""} ${Number(date.slice(8, 10))}`;
+}

@@ -78,12 +78,15 @@ describe("germination watering", () => {
   });
 
   it("keeps maturing waterings to about 1 inch a week too, and never deeper than the program's deep-watering depth", () => {
-    const plan = planFor(withChanges({ property: { expectedFirstFrost: undefined }, program: { maturingWateringsPerWeek: 2 } }));
+    // A mild place (frost in late December), so the maturing weeks are not cut short by the frost.
+    const plan = planFor(withChanges({ property: { expectedFirstFrost: "2026-12-20" }, program: { maturingWateringsPerWeek: 2 } }));
     const maturing = plan.steps.filter((s) => s.kind === "water" && s.phase === "maturing");
     expect(maturing.length).toBeGreaterThan(0);
     for (const s of maturing) expect(s.minutesPerCycle).toBe(30); // 1 in ÷ 2 = 0.5 in (the default depth) → 30 minutes at 1 in/h
-    const shallow = planFor(withChanges({ property: { expectedFirstFrost: undefined }, program: { maturingWateringsPerWeek: 1, deepWateringDepthIn: 0.75 } }));
-    for (const s of shallow.steps.filter((s) => s.kind === "water" && s.phase === "maturing")) expect(s.minutesPerCycle).toBe(45);
+    const shallow = planFor(withChanges({ property: { expectedFirstFrost: "2026-12-20" }, program: { maturingWateringsPerWeek: 1, deepWateringDepthIn: 0.75 } }));
+    const shallowMaturing = shallow.steps.filter((s) => s.kind === "water" && s.phase === "maturing");
+    expect(shallowMaturing.length).toBeGreaterThan(0);
+    for (const s of shallowMaturing) expect(s.minutesPerCycle).toBe(45);
   });
 
   it("turns a heavy-rain day's watering into a skip note and leaves the next day alone", () => {

@@ -11,6 +11,8 @@ import { warningsForAudiences } from "./rules/audiences.ts";
 import { planWarnings } from "./rules/warnings.ts";
 import { wateringSteps } from "./rules/watering.ts";
 import { warmSeasonWarnings } from "./rules/warm-season.ts";
+import { frozenGroundWatering, seasonFeedCutoff } from "./rules/season.ts";
+import { dormantSeedingSteps } from "./rules/season-advice.ts";
 import { hashInput } from "./hash.ts";
 import type { PlanInput } from "./schemas/plan-input.ts";
 import { sortSteps } from "./steps.ts";
@@ -20,6 +22,16 @@ import type { HoldOff, PhaseRange, Plan, PlanStep, PlanWarning } from "./types.t
 
 /** Bump when the same input would produce a different plan, so stored plans can be told apart. */
 export const ENGINE_VERSION = 3;
+
+/*
+ * Post-passes every step goes through, whichever rule made it: no watering on cold or frozen
+ * ground, no feeding after the season's cut-off, then the company's rules for the lawn's place
+ * (which move feedings and waterings only to days the season leaves open). Rules that add
+ * feeding or watering get all of them by being listed before this.
+ */
+function postPasses(ctx: PlanContext, steps: PlanStep[]): PlanStep[] {
+  return applyPlaceRules(ctx, seasonFeedCutoff(ctx, frozenGroundWatering(ctx, steps)));
+}
 
 /** Steps the homeowner reported skipping keep their place in the plan, marked skipped. */
 function applySkips(ctx: PlanContext, steps: PlanStep[]): PlanStep[] {
@@ -80,16 +92,20 @@ export function generatePlan(input: PlanInput): Plan {
   const steps = sortSteps(
     fromToday(
       ctx,
-      applySkips(ctx, applyPlaceRules(ctx, [
-        ...thatchCleanupSteps(ctx),
-        ...aerationCoreSteps(ctx),
-        ...wateringSteps(ctx),
-        ...mowingSteps(ctx),
-        ...feedingSteps(ctx, windows),
-        ...holdOffEndSteps(ctx, windows),
-        ...leafCleanupSteps(ctx),
-        ...checkInSteps(ctx),
-      ])),
+      applySkips(
+        ctx,
+        postPasses(ctx, [
+          ...thatchCleanupSteps(ctx),
+          ...aerationCoreSteps(ctx),
+          ...wateringSteps(ctx),
+          ...mowingSteps(ctx),
+          ...feedingSteps(ctx, windows),
+          ...holdOffEndSteps(ctx, windows),
+          ...leafCleanupSteps(ctx),
+          ...checkInSteps(ctx),
+          ...dormantSeedingSteps(ctx),
+        ]),
+      ),
     ),
   );
   const { timeline } = ctx;
@@ -106,6 +122,7 @@ export function generatePlan(input: PlanInput): Plan {
       firstMowDate: timeline.firstMow === null ? null : ctx.dateOf(timeline.firstMow),
       germinationWateringEnds: timeline.germinationEnd === null ? null : ctx.dateOf(timeline.germinationEnd),
       planEnds: ctx.dateOf(timeline.planEnd),
+      season: ctx.season.check,
     },
     prepSteps: prep,
     steps,

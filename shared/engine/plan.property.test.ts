@@ -24,7 +24,21 @@ const validInputArb = planInputArb.map((raw) => {
   return parsed.value;
 });
 
-const RUNS = { numRuns: 150 };
+const RUNS = { numRuns: Number(process.env.PROPERTY_RUNS ?? 150) };
+
+const inDateRanges = (date: string, ranges: readonly { start: string; end: string }[]) => ranges.some((r) => date >= r.start && date <= r.end);
+
+/** Month-day spans ("MM-DD", inclusive; the first may run over New Year). */
+type MonthDays = readonly [string, string];
+const inMonthDays = (date: string, [from, to]: MonthDays) => {
+  const md = date.slice(5);
+  return from <= to ? md >= from && md <= to : md >= from || md <= to;
+};
+const COLD_MONTH_DAYS: Record<"north" | "south", Record<"cool" | "warm", MonthDays>> = {
+  north: { cool: ["10-29", "03-31"], warm: ["10-29", "04-30"] },
+  south: { cool: ["04-29", "09-30"], warm: ["04-29", "10-31"] },
+};
+const WARM_FEED_MONTH_DAYS: Record<"north" | "south", MonthDays> = { north: ["09-03", "04-30"], south: ["03-04", "10-31"] };
 const allSteps = (plan: Plan): PlanStep[] => [...plan.prepSteps, ...plan.steps];
 
 // Each property generates hundreds of plans; on a busy shared machine that can pass the 5 s default.
@@ -98,35 +112,113 @@ describe("care plan invariants (property-based)", { timeout: 30_000 }, () => {
     );
   });
 
-  it("light watering never ends before the first mowing, whatever the date, zone, mix or observations (Nebraska Extension 2021)", () => {
+  it("light watering never ends before the first mowing, except on cold ground (Nebraska Extension 2021; cold soil common practice)", () => {
     fc.assert(
       fc.property(validInputArb, (input) => {
         const plan = generatePlan(input);
         if (!plan.meta.seeding) return;
-        const { firstMowDate, germinationWateringEnds } = plan.meta;
+        const { firstMowDate, germinationWateringEnds, season } = plan.meta;
         expect(firstMowDate).not.toBeNull();
         expect(germinationWateringEnds! >= firstMowDate!).toBe(true);
-        // Every day up to the first mowing has its light cycles (or a rain note standing in for them). Counted by
-        // phase, not by start times: two small-hours starts can merge into one on a spring-forward day.
+        // Light watering starts the day after the visit, or when sprouts are due once dormant seed wakes in spring.
+        const fastest = Math.min(...input.visit.seedMix.map((e) => SPECIES_FACTS[e.species].emergenceDays.min));
+        const from = season?.sowingStarts ? addDays(season.sowingStarts, fastest) : addDays(input.visit.date, 1);
+        const first = input.options.today !== undefined && input.options.today > from ? input.options.today : from;
+        // Every day up to the first mowing has its light cycles (or a rain note standing in for them), but on cold
+        // ground. Counted by phase, not by start times: two small-hours starts can merge on a spring-forward day.
         const lightOrRain = new Set(
           plan.steps.filter((s) => (s.kind === "water" && s.phase === "germination") || s.key.endsWith(":rain")).map((s) => s.date),
         );
-        for (let day = 1; addDays(input.visit.date, day) <= firstMowDate!; day++) {
-          expect(lightOrRain.has(addDays(input.visit.date, day)), addDays(input.visit.date, day)).toBe(true);
+        for (let date = first; date <= firstMowDate!; date = addDays(date, 1)) {
+          if (inDateRanges(date, season?.noWatering ?? [])) continue;
+          expect(lightOrRain.has(date), date).toBe(true);
         }
       }),
       RUNS,
     );
   });
 
-  it("no watering after the expected first frost but germination's light cycles (common practice)", () => {
+  it("no watering after the season's first frost but germination's light cycles, until the soil warms (common practice)", () => {
     fc.assert(
       fc.property(validInputArb, (input) => {
-        const frost = input.property.expectedFirstFrost;
-        if (frost === undefined) return;
         const plan = generatePlan(input);
+        const { firstFrost, soilWarms } = plan.meta.season!;
+        if (firstFrost === null || soilWarms === null) return;
         for (const s of plan.steps) {
-          if (s.kind === "water" && s.date >= frost) expect(s.phase, s.key).toBe("germination");
+          if (s.kind === "water" && s.date >= firstFrost && s.date < soilWarms) expect(s.phase, s.key).toBe("germination");
+        }
+      }),
+      RUNS,
+    );
+  });
+
+  it("never a watering on cold or frozen ground: from two weeks after the first frost until the soil warms (common practice)", () => {
+    fc.assert(
+      fc.property(validInputArb, (input) => {
+        const plan = generatePlan(input);
+        const season = plan.meta.season!;
+        if (season.firstFrost !== null) {
+          // The cut-off is tied to the season's frost: its first closed range starts two weeks after it.
+          expect(season.noWatering[0]?.start).toBe(addDays(season.firstFrost, 14));
+        }
+        for (const s of allSteps(plan)) {
+          if (s.kind === "water") expect(inDateRanges(s.date, season.noWatering), s.key).toBe(false);
+        }
+        // Without an entered frost the closed days are the hemisphere's defaults (tables/seasons.ts, from memory):
+        // frost Oct 15 / Apr 15 + 14 days, soil warm Apr 1 / Oct 1 (cool) or May 1 / Nov 1 (warm).
+        if (input.property.expectedFirstFrost !== undefined || input.property.timeZone === "Pacific/Honolulu") return;
+        const winter = COLD_MONTH_DAYS[plan.meta.hemisphere][season.family];
+        for (const s of plan.steps) if (s.kind === "water") expect(inMonthDays(s.date, winter), s.key).toBe(false);
+      }),
+      RUNS,
+    );
+  });
+
+  it("never a feeding after the season's cut-off: cold ground, and warm-season lawns from six weeks before the frost (common practice; from memory)", () => {
+    fc.assert(
+      fc.property(validInputArb, (input) => {
+        const plan = generatePlan(input);
+        const season = plan.meta.season!;
+        for (const s of allSteps(plan)) {
+          if (s.kind === "feed") expect(inDateRanges(s.date, season.noFeeding), s.key).toBe(false);
+        }
+        if (input.property.expectedFirstFrost !== undefined || input.property.timeZone === "Pacific/Honolulu") return;
+        // Defaults: cool as for watering; warm from Oct 15 − 42 days = Sep 3 (Apr 15 − 42 = Mar 4) until May 1 (Nov 1).
+        const cutOff = season.family === "warm" ? WARM_FEED_MONTH_DAYS[plan.meta.hemisphere] : COLD_MONTH_DAYS[plan.meta.hemisphere].cool;
+        for (const s of plan.steps) if (s.kind === "feed") expect(inMonthDays(s.date, cutOff), s.key).toBe(false);
+      }),
+      RUNS,
+    );
+  });
+
+  it("dormant seed gets no watering, mowing or feeding before the soil warms, and the plan says when that is", () => {
+    fc.assert(
+      fc.property(validInputArb, (input) => {
+        const plan = generatePlan(input);
+        const { season } = plan.meta;
+        if (season?.verdict !== "dormant_seeding") return;
+        expect(season.sowingStarts).not.toBeNull();
+        for (const s of plan.steps) {
+          if (s.kind === "water" || s.kind === "mow" || s.kind === "feed") expect(s.date >= season.sowingStarts!, s.key).toBe(true);
+        }
+        const wakeUp = plan.steps.find((s) => s.key === "note:spring_wake_up");
+        const today = input.options.today;
+        if (today === undefined || today <= season.sowingStarts!) expect(wakeUp?.date).toBe(season.sowingStarts);
+        expect(plan.warnings.some((w) => w.code === "dormant_seeding" && w.audience === "homeowner")).toBe(true);
+      }),
+      RUNS,
+    );
+  });
+
+  it("no step before the plan's creation day, so none is born missed", () => {
+    fc.assert(
+      fc.property(validInputArb, (input) => {
+        const today = input.options.today;
+        if (today === undefined) return;
+        const plan = generatePlan(input);
+        for (const s of allSteps(plan)) {
+          expect(s.date >= today, s.key).toBe(true);
+          expect(s.state).toBeUndefined();
         }
       }),
       RUNS,

@@ -40,10 +40,15 @@ export function estimateSlowestEmergence(mix: MixFacts, sproutsSeenDay: number |
   return Math.max(sproutsSeenDay, Math.ceil(slow.min + position * (slow.max - slow.min)));
 }
 
+/**
+ * `startDay` > 0 when seed sown on cold soil lies dormant: its clock starts when the soil
+ * warms, and sprouts reported before then count as sprouts on that clock's first day.
+ */
 export function computeTimeline(
   program: ProgramSettings,
   mix: MixFacts | null,
   observations: TimelineObservations,
+  startDay = 0,
 ): Timeline {
   if (!mix) {
     const establishmentEnd = RECOVERY_RULE.days;
@@ -55,9 +60,9 @@ export function computeTimeline(
       planEnd: establishmentEnd + program.maturingDays,
     };
   }
-  const slowestEmergence = estimateSlowestEmergence(mix, observations.sproutsSeenDay);
-  const afterSprouts =
-    observations.sproutsSeenDay === null ? 0 : observations.sproutsSeenDay + program.wateringDaysAfterSprouts;
+  const sprouts = observations.sproutsSeenDay === null ? null : Math.max(1, observations.sproutsSeenDay - startDay);
+  const slowestEmergence = estimateSlowestEmergence(mix, sprouts);
+  const afterSprouts = sprouts === null ? 0 : sprouts + program.wateringDaysAfterSprouts;
   const firstMow = Math.max(program.firstMowMinDays, slowestEmergence + program.firstMowDaysAfterEmergence);
   // The program's germination days (bounded at ≥ 14) is a floor no observation
   // can shorten: early sprouts only stop watering from running past it. The
@@ -68,11 +73,11 @@ export function computeTimeline(
     Math.min(MAX_MAKE_UP_DAYS, observations.skippedGerminationWateringDays);
   const establishmentEnd = germinationEnd + program.establishmentDays;
   return {
-    germinationEnd,
-    slowestEmergence,
-    firstMow,
-    establishmentEnd,
-    planEnd: establishmentEnd + program.maturingDays,
+    germinationEnd: germinationEnd + startDay,
+    slowestEmergence: slowestEmergence + startDay,
+    firstMow: firstMow + startDay,
+    establishmentEnd: establishmentEnd + startDay,
+    planEnd: establishmentEnd + program.maturingDays + startDay,
   };
 }
 

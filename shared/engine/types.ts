@@ -143,6 +143,35 @@ export interface PhaseRange {
   readonly end: IsoDate;
 }
 
+/** Where the visit falls against its work's best window (rules/season.ts). */
+export type SeasonVerdict = "in_window" | "early" | "late" | "dormant_seeding";
+/** Seeding, winter ryegrass overseeding of a warm-season lawn, or care without seed (aeration, feeding…). */
+export type SeasonWork = "seeding" | "winter_overseeding" | "care";
+export type SeasonPeriod = "spring" | "summer" | "fall" | "winter";
+
+export interface SeasonCheck {
+  readonly verdict: SeasonVerdict;
+  readonly work: SeasonWork;
+  /** The grass family whose season was judged: the seed's for seeding, the lawn's otherwise. */
+  readonly family: "cool" | "warm";
+  /** The visit's part of the growing year; null in frost-free places. */
+  readonly period: SeasonPeriod | null;
+  /** The season's first frost the check used; null in frost-free places. */
+  readonly firstFrost: IsoDate | null;
+  /** True when no frost date was entered for this season and the hemisphere's default stood in. */
+  readonly firstFrostAssumed: boolean;
+  /** The work's best window in this season (inclusive), when it has one. */
+  readonly window: { readonly start: IsoDate; readonly end: IsoDate } | null;
+  /** When the soil is expected to warm for this grass family next spring. */
+  readonly soilWarms: IsoDate | null;
+  /** Seed lying dormant: the day the plan expects it to start growing. */
+  readonly sowingStarts: IsoDate | null;
+  /** Cold or frozen ground from this winter to next spring, and the next: no watering (inclusive dates). */
+  readonly noWatering: readonly { readonly start: IsoDate; readonly end: IsoDate }[];
+  /** The season's feeding cut-off until spring, this year and next: no feeding (inclusive dates). */
+  readonly noFeeding: readonly { readonly start: IsoDate; readonly end: IsoDate }[];
+}
+
 export interface PlanMeta {
   readonly engineVersion: number;
   readonly programVersion: number;
@@ -156,6 +185,8 @@ export interface PlanMeta {
   readonly firstMowDate: IsoDate | null;
   readonly germinationWateringEnds: IsoDate | null;
   readonly planEnds: IsoDate;
+  /** The season check; absent on plans stored before engine version 3. */
+  readonly season?: SeasonCheck;
   /** Present on recomputed plans: the day the recompute was anchored on. */
   readonly recomputedOn?: IsoDate;
 }

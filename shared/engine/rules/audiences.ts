@@ -2,6 +2,7 @@ import type { PlanContext } from "../context.ts";
 import type { PlanWarning, WarningFinding, WarningSeverity } from "../types.ts";
 import { WARM_SEASON_HOMEOWNER } from "./warm-season.ts";
 import { newLawnWateringForHomeowner } from "./place-rules.ts";
+import { SEASON_HOMEOWNER } from "./season-advice.ts";
 
 type HomeownerWording = Pick<WarningFinding, "message" | "reason"> & { severity: WarningSeverity };
 
@@ -60,6 +61,7 @@ const HOMEOWNER: Partial<Record<string, (ctx: PlanContext, finding: WarningFindi
     reason: finding.reason,
   }),
   ...WARM_SEASON_HOMEOWNER,
+  ...SEASON_HOMEOWNER,
 };
 
 /** The plan's warnings: every finding for the crew, then the homeowner versions (sources kept). */

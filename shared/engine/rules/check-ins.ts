@@ -13,14 +13,17 @@ const AFTER_SLOWEST_DAYS = 3;
 
 export function checkInSteps(ctx: PlanContext): PlanStep[] {
   const planned = new Map<number, string>();
+  // Seed lying dormant: sprouts are counted from the day the soil warms, not from the visit.
+  const start = ctx.season.sowingStartDay;
   if (ctx.mix) {
-    planned.set(ctx.mix.fastest.emergenceDays.min, `The ${ctx.mix.fastest.name} in your mix usually starts to show about now.`);
-    const afterSlowest = ctx.mix.slowest.emergenceDays.max + AFTER_SLOWEST_DAYS;
+    planned.set(start + ctx.mix.fastest.emergenceDays.min, `The ${ctx.mix.fastest.name} in your mix usually starts to show about now.`);
+    const afterSlowest = start + ctx.mix.slowest.emergenceDays.max + AFTER_SLOWEST_DAYS;
     if (!planned.has(afterSlowest)) {
       planned.set(afterSlowest, `Even the ${ctx.mix.slowest.name} should be up by now. A photo lets us spot thin patches while there is time to fix them.`);
     }
   }
-  for (const day of ctx.program.checkInPhotoDays) {
+  for (const programDay of ctx.program.checkInPhotoDays) {
+    const day = programDay + start;
     if (!planned.has(day)) planned.set(day, "A progress photo lets us check the lawn and answer questions early.");
   }
   const days = [...planned.keys()].filter((d) => d >= 1 && d <= ctx.timeline.planEnd).sort((a, b) => a - b);

@@ -49,12 +49,15 @@ export function feedingSteps(ctx: PlanContext, windows: readonly HoldOffWindow[]
   const steps: PlanStep[] = [];
   const area = ctx.input.visit.areaFt2;
 
+  // Seed lying dormant is fed when it starts to grow in spring, not on cold ground.
+  const start = ctx.season.sowingStartDay;
   if (ctx.seeding && !starterAppliedAtVisit(ctx)) {
-    const date = ctx.dateOf(1);
+    const starterDay = Math.max(1, start);
+    const date = ctx.dateOf(starterDay);
     steps.push({
       key: oneOffKey("feed", "starter"),
       date,
-      phase: ctx.phaseOf(1),
+      phase: ctx.phaseOf(starterDay),
       kind: "feed",
       title: "Spread a starter fertilizer on the seeded lawn",
       detail: `Use a starter (phosphorus-rich) or organic lawn fertilizer. Aim for about ${formatNumber(phosphateFromPhosphorus(STARTER_FEEDING.minPLbPer1000))}–${formatNumber(phosphateFromPhosphorus(STARTER_FEEDING.maxPLbPer1000))} lb of phosphate (P₂O₅, the middle number on the bag) per 1,000 ft², which is ${STARTER_FEEDING.minPLbPer1000}–${STARTER_FEEDING.maxPLbPer1000} lb of phosphorus, or follow the bag. Not a weed-and-feed. Water lightly afterward as usual.`,
@@ -69,10 +72,11 @@ export function feedingSteps(ctx: PlanContext, windows: readonly HoldOffWindow[]
   }
 
   const highN = windows.find((w) => w.kind === "high_n_quick_release");
-  if (ctx.seeding && highN && highN.endDay + 1 <= ctx.timeline.planEnd) {
+  const followUpDay = highN ? Math.max(highN.endDay, start + ctx.program.highNQuickReleaseHoldDays) + 1 : 0;
+  if (ctx.seeding && highN && followUpDay <= ctx.timeline.planEnd) {
     // The follow-up feed is slow-release, yet it still waits out the high-N
     // window: a homeowner handed "feed the lawn" may reach for any bag.
-    const day = highN.endDay + 1;
+    const day = followUpDay;
     const date = ctx.dateOf(day);
     const n = SINGLE_FEEDING_N.minLbPer1000;
     steps.push({

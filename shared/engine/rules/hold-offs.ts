@@ -23,12 +23,14 @@ export function holdOffWindows(ctx: PlanContext): HoldOffWindow[] {
   const { timeline, program } = ctx;
   if (!ctx.seeding || timeline.firstMow === null) return [];
   const nthMowDay = timeline.firstMow + (program.mowingsBeforeHerbicide - 1) * FIRST_MOW_RULE.daysBetweenMowings;
-  const herbicideEnd = Math.max(program.weedAndFeedHoldDays, nthMowDay);
+  // Seed lying dormant is as vulnerable when it sprouts in spring as new seed: its windows count from then.
+  const start = ctx.season.sowingStartDay;
+  const herbicideEnd = Math.max(start + program.weedAndFeedHoldDays, nthMowDay);
   return [
     { kind: "weed_and_feed", startDay: 0, endDay: herbicideEnd },
     { kind: "broadleaf_herbicide", startDay: 0, endDay: herbicideEnd },
-    { kind: "crabgrass_pre_emergent", startDay: 0, endDay: program.preEmergentHoldDays },
-    { kind: "high_n_quick_release", startDay: 0, endDay: program.highNQuickReleaseHoldDays },
+    { kind: "crabgrass_pre_emergent", startDay: 0, endDay: start + program.preEmergentHoldDays },
+    { kind: "high_n_quick_release", startDay: 0, endDay: start + program.highNQuickReleaseHoldDays },
     // Traffic stays off at least until the grass is firm enough for its first mowing.
     { kind: "heavy_traffic", startDay: 0, endDay: Math.max(program.trafficHoldDays, timeline.firstMow) },
   ];

@@ -7,6 +7,7 @@ import { FEED_DELAY_LIMIT_DAYS, PLACE_RULES_SOURCE, WATERING_MOVE_LIMIT_DAYS } f
 import type { Why } from "../tables/provenance.ts";
 import { TAPER_RULE } from "../tables/watering.ts";
 import type { PlanStep, WarningFinding } from "../types.ts";
+import { inRanges } from "./season.ts";
 
 /*
  * The company's rules for the place a lawn is in: fertilizer blackout dates, phosphorus only
@@ -147,7 +148,10 @@ function placeFeed(ctx: PlanContext, step: PlanStep, windows: readonly Window[],
   const limit = step.feed?.product === "starter" ? FEED_DELAY_LIMIT_DAYS.starter : FEED_DELAY_LIMIT_DAYS.other;
   const offset = day - ctx.visitDay;
   for (let wait = 1; wait <= limit && offset + wait <= ctx.timeline.planEnd; wait++) {
-    if (windowHolding(windows, day + wait) === null) return movedFeed(ctx, step, offset + wait, window, place);
+    // Never onto a day the season check closed to feeding (cold ground, end of the season).
+    if (windowHolding(windows, day + wait) === null && inRanges(offset + wait, ctx.season.feedingClosed) === null) {
+      return movedFeed(ctx, step, offset + wait, window, place);
+    }
   }
   return droppedFeed(step, window, place);
 }
@@ -173,7 +177,12 @@ function placeWatering(ctx: PlanContext, steps: readonly PlanStep[], rules: Plac
   const taken = new Set<number>();
   for (const s of steps) if (s.kind === "water" || (s.kind === "note" && s.key.endsWith(":rain"))) taken.add(toDayNumber(s.date) - ctx.visitDay);
 
-  const free = (offset: number) => offset >= firstDay && offset <= lastDay && !taken.has(offset) && allowed[weekdayOfDayNumber(ctx.visitDay + offset)] === true;
+  const free = (offset: number) =>
+    offset >= firstDay &&
+    offset <= lastDay &&
+    !taken.has(offset) &&
+    allowed[weekdayOfDayNumber(ctx.visitDay + offset)] === true &&
+    inRanges(offset, ctx.season.wateringClosed) === null;
   const deepStart = minutesOfLocalTime(ctx.program.deepWateringTime);
 
   const out: PlanStep[] = [];

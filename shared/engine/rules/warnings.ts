@@ -11,6 +11,7 @@ import { isHighNQuickRelease } from "./feeding.ts";
 import { isAutumnVisit } from "./seasonal.ts";
 import { assumedRatePhrase } from "./watering-notes.ts";
 import { isWinterOverseeding, seedRangeFor } from "./warm-season.ts";
+import { seasonFindings } from "./season-advice.ts";
 
 /** How far outside the species range (as a fraction of the range's edge) turns a caution into a risk. */
 const FAR_OUTSIDE_RANGE = 0.5;
@@ -76,7 +77,12 @@ export function planWarnings(ctx: PlanContext): PlanWarning[] {
     if (w) warnings.push(w);
   };
 
-  if (ctx.seeding && ctx.frostDay !== null) add(frostWarning(ctx.frostDay));
+  // The entered frost still ahead: warn by days left. A passed or assumed frost, a dormant seeding
+  // or any other out-of-window work is the season check's to report.
+  const frostAhead = ctx.seeding && ctx.input.property.expectedFirstFrost !== undefined && !ctx.season.check.firstFrostAssumed;
+  const frost = frostAhead && ctx.frostDay !== null && ctx.frostDay > 0 && ctx.season.sowingStartDay === 0 ? frostWarning(ctx.frostDay) : null;
+  add(frost);
+  for (const finding of seasonFindings(ctx, frost !== null)) add(finding);
 
   const sowingIntoTurf = visit.services.some((s) => s === "overseeding" || s === "slit_seeding");
   if (sowingIntoTurf && ctx.lawnSeason === "warm" && isAutumnVisit(ctx)) {

@@ -14,6 +14,7 @@ import {
 import type { Why } from "../tables/provenance.ts";
 import type { PlanStep } from "../types.ts";
 import { wateringNotes } from "./watering-notes.ts";
+import { SUMMER_SEEDING_RULE } from "../tables/seasons.ts";
 import { localTimeFromMinutes, minutesOfLocalTime } from "../dates.ts";
 
 const WATER_CAUTIONS = ["watering_restrictions"] as const;
@@ -109,6 +110,14 @@ function germinationStep(ctx: PlanContext, day: number, minutes: number, starts:
     why: germinationWhy,
     cautions: WATER_CAUTIONS,
   };
+}
+
+/** Light waterings a day: the program's, one more for cool-season seed sown in summer heat. */
+function cyclesPerDay(ctx: PlanContext): number {
+  const cycles = ctx.program.wateringCyclesPerDayGermination;
+  const { check } = ctx.season;
+  const summerSeeding = check.work === "seeding" && check.family === "cool" && check.period === "summer" && check.verdict === "early";
+  return summerSeeding ? Math.min(SUMMER_SEEDING_RULE.maxCyclesPerDay, cycles + SUMMER_SEEDING_RULE.extraCyclesPerDay) : cycles;
 }
 
 /** One watering's depth: the week's "about 1 inch" shared by the week's waterings, never more than the program's deepest. */
@@ -211,10 +220,11 @@ export function wateringSteps(ctx: PlanContext): PlanStep[] {
 
   if (timeline.germinationEnd !== null) {
     const lightMinutes = wholeMinutes(program.waterDepthPerCycleIn, ctx.precipitationRate);
-    const starts = parseStarts(
-      program.germinationWateringTimes ?? GERMINATION_TIMES_BY_CYCLES[program.wateringCyclesPerDayGermination] ?? [],
-    );
-    push(0, () => {
+    const starts = parseStarts(program.germinationWateringTimes ?? GERMINATION_TIMES_BY_CYCLES[cyclesPerDay(ctx)] ?? []);
+    // Seed lying dormant gets no watering until sprouts are due in spring (rules/season-advice.ts says so).
+    const sowingStart = ctx.season.sowingStartDay;
+    const firstLightDay = sowingStart > 0 && ctx.mix ? sowingStart + ctx.mix.fastest.emergenceDays.min : 1;
+    if (sowingStart === 0) push(0, () => {
       const date = ctx.dateOf(0);
       const byHand = ctx.input.property.irrigation.kind === "none";
       return {
@@ -232,7 +242,7 @@ export function wateringSteps(ctx: PlanContext): PlanStep[] {
         cautions: WATER_CAUTIONS,
       };
     });
-    for (let day = 1; day <= timeline.germinationEnd; day++) push(day, () => germinationStep(ctx, day, lightMinutes, starts));
+    for (let day = firstLightDay; day <= timeline.germinationEnd; day++) push(day, () => germinationStep(ctx, day, lightMinutes, starts));
 
     // Taper after the first mowing: once a day, then every other day, then deep.
     const establishmentLast = Math.min(timeline.establishmentEnd, stopDay);
@@ -260,9 +270,12 @@ export function wateringSteps(ctx: PlanContext): PlanStep[] {
   } else {
     const feeding = ctx.services.has("fertiliser_only") || ctx.services.has("starter_fertiliser");
     const amount = ctx.input.property.irrigation.kind === "none" ? "" : `, ${maturing.minutes} minutes ${wherePhrase(ctx)}`;
-    push(0, () =>
-      deepStep(ctx, 0, maturing, deepStart, `${feeding ? "Water the fertilizer in today" : "Water the lawn deeply today"}${amount}`),
-    );
+    // Not once the frost has come: the lawn has stopped using water, and rain or snow does the job.
+    if (stopDay >= 0) {
+      push(0, () =>
+        deepStep(ctx, 0, maturing, deepStart, `${feeding ? "Water the fertilizer in today" : "Water the lawn deeply today"}${amount}`),
+      );
+    }
     for (const day of deepWateringDays(3, Math.min(timeline.establishmentEnd, stopDay), program.maturingWateringsPerWeek)) {
       push(day, () => deepStep(ctx, day, maturing, deepStart));
     }

@@ -1,5 +1,4 @@
 import { z } from "zod";
-import { isValidIsoDate, toDayNumber } from "../dates.ts";
 import { SPRINKLER_TYPES } from "../tables/sprinklers.ts";
 import { isoDateSchema, localTimeSchema, speciesSchema, timeZoneSchema } from "./common.ts";
 import { placeRulesSchema } from "./place-rules.ts";
@@ -108,7 +107,7 @@ export const propertySchema = z
     timeZone: timeZoneSchema,
     /** Optional: derived from the time zone when absent. */
     hemisphere: z.enum(["north", "south"]).optional(),
-    /** Optional: frost-free climates have none. */
+    /** Optional: without it the hemisphere's default first frost is assumed, except in frost-free zones (tables/seasons.ts). */
     expectedFirstFrost: isoDateSchema.optional(),
   })
   .superRefine((property, ctx) => {
@@ -140,27 +139,18 @@ export const planOptionsSchema = z.object({
   observations: z.array(observationSchema).max(500).default([]),
 });
 
-export const planInputSchema = z
-  .object({
-    visit: visitSchema,
-    property: propertySchema,
-    program: programSettingsSchema.prefault({}),
-    options: planOptionsSchema.prefault({}),
-    /** The rules of the place the lawn is in, as its company entered them; absent: none. */
-    placeRules: placeRulesSchema.optional(),
-  })
-  .superRefine((input, ctx) => {
-    // zod still runs this when other fields failed, so only compare real dates.
-    const frost = input.property?.expectedFirstFrost;
-    const visitDate = input.visit?.date;
-    if (isValidIsoDate(frost) && isValidIsoDate(visitDate) && toDayNumber(frost) <= toDayNumber(visitDate)) {
-      ctx.addIssue({
-        code: "custom",
-        path: ["property", "expectedFirstFrost"],
-        message: "The expected first frost must be after the visit date",
-      });
-    }
-  });
+/*
+ * An expected first frost before the visit is allowed: the frost has come, so the work is late or
+ * a dormant seeding, which the season check (rules/season.ts) reports.
+ */
+export const planInputSchema = z.object({
+  visit: visitSchema,
+  property: propertySchema,
+  program: programSettingsSchema.prefault({}),
+  options: planOptionsSchema.prefault({}),
+  /** The rules of the place the lawn is in, as its company entered them; absent: none. */
+  placeRules: placeRulesSchema.optional(),
+});
 
 export type SeedMixEntry = z.output<typeof seedMixEntrySchema>;
 export type ProductApplied = z.output<typeof productAppliedSchema>;

@@ -18,6 +18,8 @@ export const ZONES = [
   "Australia/Lord_Howe",
   "America/Santiago",
   "UTC",
+  // Frost-free: no frost date, no cold-ground season.
+  "Pacific/Honolulu",
 ] as const;
 
 const firstDay = daysFromCivil(2025, 1, 1);
@@ -113,7 +115,13 @@ export const planInputArb: fc.Arbitrary<PlanInputRaw> = fc
     highestExtra: fc.constantFrom(0, 0.5, 1),
     step: fc.option(fc.constantFrom(0.25, 0.5, 1), { nil: undefined }),
     zone: fc.constantFrom(...ZONES),
-    frostAfterDays: fc.option(fc.integer({ min: 1, max: 200 }), { nil: undefined }),
+    // Frosts before the visit too: a late visit, or a dormant seeding.
+    frostAfterDays: fc.option(fc.integer({ min: -150, max: 200 }), { nil: undefined }),
+    // The lawn's grass: the species sown, or a cool- or warm-season lawn whatever was sown (winter ryegrass on bermudagrass).
+    lawn: fc.constantFrom("sown", "cool", "warm") as fc.Arbitrary<"sown" | "cool" | "warm">,
+    hemisphere: fc.option(fc.constantFrom("north", "south") as fc.Arbitrary<"north" | "south">, { nil: undefined }),
+    // The plan made on a day around the visit (logged late, or imported).
+    todayOffset: fc.option(fc.integer({ min: -20, max: 40 }), { nil: undefined }),
     program: programArb,
     customTimes: fc.boolean(),
     sprouts: fc.option(fc.integer({ min: 1, max: 40 }), { nil: undefined }),
@@ -142,7 +150,11 @@ export const planInputArb: fc.Arbitrary<PlanInputRaw> = fc
         products: base.products,
       },
       property: {
-        grassType: { species: seeding ? base.seedMix.map((e) => e.species) : ["tall_fescue"] },
+        grassType: {
+          species:
+            base.lawn === "warm" ? ["bermudagrass"] : base.lawn === "cool" || !seeding ? ["tall_fescue"] : base.seedMix.map((e) => e.species),
+        },
+        ...(base.hemisphere === undefined ? {} : { hemisphere: base.hemisphere }),
         lawnCondition: base.lawnCondition,
         irrigation: {
           kind: base.irrigationKind,
@@ -157,6 +169,6 @@ export const planInputArb: fc.Arbitrary<PlanInputRaw> = fc
         ...(base.frostAfterDays === undefined ? {} : { expectedFirstFrost: fromDayNumber(visitDay + base.frostAfterDays) }),
       },
       program: { ...base.program, ...(times ? { germinationWateringTimes: times } : {}) },
-      options: { observations },
+      options: { observations, ...(base.todayOffset === undefined ? {} : { today: fromDayNumber(visitDay + base.todayOffset) }) },
     } satisfies PlanInputRaw;
   });

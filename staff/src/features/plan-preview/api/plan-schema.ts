@@ -68,6 +68,21 @@ export const planSchema: z.ZodType<Plan> = z.object({
     firstMowDate: isoDate.nullable(),
     germinationWateringEnds: isoDate.nullable(),
     planEnds: isoDate,
+    season: z
+      .object({
+        verdict: z.enum(["in_window", "early", "late", "dormant_seeding"]),
+        work: z.enum(["seeding", "winter_overseeding", "care"]),
+        family: z.enum(["cool", "warm"]),
+        period: z.enum(["spring", "summer", "fall", "winter"]).nullable(),
+        firstFrost: isoDate.nullable(),
+        firstFrostAssumed: z.boolean(),
+        window: z.object({ start: isoDate, end: isoDate }).nullable(),
+        soilWarms: isoDate.nullable(),
+        sowingStarts: isoDate.nullable(),
+        noWatering: z.array(z.object({ start: isoDate, end: isoDate })),
+        noFeeding: z.array(z.object({ start: isoDate, end: isoDate })),
+      })
+      .optional(),
     recomputedOn: isoDate.optional(),
   }),
   prepSteps: z.array(stepSchema),
