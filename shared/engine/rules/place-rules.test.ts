@@ -94,7 +94,11 @@ describe("fertilizer blackout windows", () => {
   });
 
   it("moves a feeding out of a window that runs over New Year", () => {
-    const december = withChanges({ visit: { date: "2026-12-20", services: ["overseeding"], products: [] }, property: { expectedFirstFrost: undefined } });
+    // A December seeding in the north now waits for spring (season check), so this one is near Sydney, where December is summer.
+    const december = withChanges({
+      visit: { date: "2026-12-20", services: ["overseeding"], products: [] },
+      property: { expectedFirstFrost: undefined, timeZone: "Australia/Sydney" },
+    });
     expect(plan(december).steps.find((s) => s.key === "feed:starter")?.date).toBe("2026-12-21");
     const moved = plan(withRules(december, { name: "Example State", fertilizerBlackouts: [{ from: "12-15", to: "01-02" }] }));
     // First day after January 2: January 3, 2027, a 13-day wait.
