@@ -1,6 +1,7 @@
 import { Router, type Request, type Response, type NextFunction } from "express";
 import type { z } from "zod";
 import type { Role } from "#shared/schemas/auth";
+import { findNul, NUL_MESSAGE } from "#shared/schemas/text";
 import { HttpError, fieldErrors } from "./errors.ts";
 import type { SessionUser } from "../auth/session-user.ts";
 
@@ -48,11 +49,23 @@ export function route<PS extends Schema | undefined = undefined, QS extends Sche
   return spec as unknown as RouteSpec;
 }
 
+const invalidInput = (fields: Record<string, string>) => new HttpError(400, "invalid_input", "Some of the information is not valid.", fields);
+
+/**
+ * Every part is checked for NUL characters, with or without a schema: handlers and
+ * middleware may read the raw request, and PostgreSQL refuses NUL in text.
+ */
+function refuseNul(value: unknown, part: string) {
+  const path = findNul(value);
+  if (path) throw invalidInput({ [[part === "body" ? undefined : part, ...path.map(String)].filter(Boolean).join(".") || "_"]: NUL_MESSAGE });
+}
+
 function parsePart(schema: Schema | undefined, value: unknown, part: string) {
+  refuseNul(value, part);
   if (!schema) return undefined;
   const result = schema.safeParse(value ?? {});
   if (!result.success) {
-    throw new HttpError(400, "invalid_input", "Some of the information is not valid.", fieldErrors(result.error, part === "body" ? undefined : part));
+    throw invalidInput(fieldErrors(result.error, part === "body" ? undefined : part));
   }
   return result.data;
 }
