@@ -3,6 +3,7 @@ import type { z } from "zod";
 import type { Role } from "#shared/schemas/auth";
 import { findNul, NUL_MESSAGE } from "#shared/schemas/text";
 import { HttpError, fieldErrors } from "./errors.ts";
+import { REVALIDATE } from "./cache-control.ts";
 import type { SessionUser } from "../auth/session-user.ts";
 
 /**
@@ -37,6 +38,11 @@ export type RouteSpec<PS extends Schema | undefined = Schema | undefined, QS ext
    * action name (e.g. "plan.read"); the first path parameter names the record.
    */
   audit?: string;
+  /**
+   * A JSON read whose answer must not be kept even by the browser (server/http/cache-control.ts);
+   * other JSON reads revalidate with their ETag.
+   */
+  cache?: "no-store";
   /** Extra middleware before validation (e.g. multipart parsing). */
   before?: ((req: Request, res: Response, next: NextFunction) => void)[];
   handler: (ctx: RouteContext<Infer<PS>, Infer<QS>, Infer<BS>>) => Promise<unknown> | unknown;
@@ -110,7 +116,10 @@ export function buildRouter(specs: readonly RouteSpec[], options: { audit?: (ent
       const result = await spec.handler(ctx as never);
       if (res.headersSent) return;
       if (result === undefined) res.status(204).end();
-      else res.json(result);
+      else {
+        if (spec.method === "get" && spec.cache !== "no-store") res.setHeader("Cache-Control", REVALIDATE);
+        res.json(result);
+      }
     });
   }
   return router;
