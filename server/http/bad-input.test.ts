@@ -51,7 +51,7 @@ describe("NUL characters", () => {
 
 describe("dates outside 1900–2199", () => {
   it.each(["/api/follow-ups", "/api/follow-ups.csv", "/api/reports/callbacks"])("%s refuses year 0000 and 9999 filters", async (path) => {
-    for (const [name, value] of [["from", "0000-01-01"], ["to", "9999-12-31"]]) {
+    for (const [name, value] of [["from", "0000-01-01"], ["to", "9999-12-31"]] as const) {
       const res = await manager.get(path).query({ [name]: value });
       expect(res.status).toBe(400);
       expect(res.body.error.fields).toEqual({ [`query.${name}`]: DATE_RANGE_MESSAGE });
