@@ -52,6 +52,11 @@ class CellReader {
   text(column: ImportColumn, max = 200): string | null {
     const value = (this.record[column] ?? "").trim();
     if (!value) return null;
+    // Never passed on: PostgreSQL text cannot hold NUL.
+    if (value.includes("\0")) {
+      this.errors[column] = "Contains the NUL character (\\u0000); retype the cell";
+      return null;
+    }
     if (value.length > max) {
       this.errors[column] = `Keep it under ${max} characters`;
       return null;

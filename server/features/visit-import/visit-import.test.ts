@@ -215,13 +215,15 @@ describe("import", () => {
       good({ customer_ref: "BAD-4", email: `bad4.${tag}@mail.example`, street: "4 Wrong Way", irrigation: "none", sprinkler_type: "rotor", precipitation_rate_in_per_h: "" }),
       good({ customer_ref: "BAD-5", email: `bad5.${tag}@mail.example`, street: "5 Wrong Way", irrigation: "", sprinkler_type: "rotor", precipitation_rate_in_per_h: "" }),
     ]);
-    const res = await upload(boss, "/api/visit-imports/preview", `${file}\nBAD-6,6 Wrong Way,9/8/2026\n`).expect(200);
+    const nul = toCsv([good({ customer_ref: "BAD\u00007", email: `bad7.${tag}@mail.example`, street: "7 Wrong\u0000 Way" })]).split("\r\n")[1];
+    const res = await upload(boss, "/api/visit-imports/preview", `${file}\nBAD-6,6 Wrong Way,9/8/2026\n${nul}\n`).expect(200);
     const rows = byRow(res.body.rows);
     expect(rows[2]!.errors).toEqual({ visit_date: expect.stringMatching(/no month 25.*month first/) });
     expect(rows[3]!.errors).toEqual({ visit_date: "Write the year in full: 9/8/2026", expected_first_frost: "Use a date from 1900 to 2199" });
     expect(rows[4]!.errors).toEqual({ sprinkler_type: "Use one of: fixed_spray, rotor, oscillating, impact" });
     expect(rows[5]!.errors).toEqual({ sprinkler_type: expect.stringMatching(/without irrigation has no sprinkler/) });
     expect(rows[6]!.errors).toEqual({ irrigation: "Give the irrigation kind with a sprinkler type" });
+    expect(rows[8]!.errors).toEqual({ street: expect.stringMatching(/NUL character/), customer_ref: expect.stringMatching(/NUL character/) });
     expect(rows[7]!.errors.row).toMatch(/^This row has 3 cells where the header has \d+: column D \(email\) and after are missing/);
   });
 
