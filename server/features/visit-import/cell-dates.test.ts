@@ -23,6 +23,7 @@ describe("import dates", () => {
 
   it("refuses two-digit years, impossible days and other shapes, saying why", () => {
     expect(readCellDate("9/8/26")).toEqual({ error: "Write the year in full: 9/8/2026" });
+    expect(readCellDate("9/8/126")).toEqual({ error: '"9/8/126" is not a date: write the year with four digits' });
     expect(readCellDate("2/29/2027")).toEqual({ error: '"2/29/2027" is not a date: February 2027 has no day 29' });
     expect(readCellDate("2026-13-40")).toEqual({ error: '"2026-13-40" is not a date: there is no month 13' });
     expect(readCellDate("Sept 8, 2026")).toMatchObject({ error: expect.stringMatching(/MM\/DD\/YYYY.*YYYY-MM-DD/) });
@@ -30,7 +31,7 @@ describe("import dates", () => {
   });
 
   it("keeps to the product's date range", () => {
-    expect(readCellDate("01/01/0000")).toEqual({ error: expect.stringMatching(/no month|not a date|1900/) });
+    expect(readCellDate("01/01/0000")).toEqual({ error: DATE_RANGE_MESSAGE });
     expect(readCellDate("0000-01-01")).toEqual({ error: DATE_RANGE_MESSAGE });
     expect(readCellDate("12/31/9999")).toEqual({ error: DATE_RANGE_MESSAGE });
   });

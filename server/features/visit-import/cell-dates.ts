@@ -26,7 +26,8 @@ export function readCellDate(text: string): CellDate {
     date = value;
   } else {
     const [, m, d, y] = us!;
-    if (y!.length !== 4) return { error: `Write the year in full: ${m}/${d}/20${y!.padStart(2, "0").slice(-2)}` };
+    if (y!.length <= 2) return { error: `Write the year in full: ${m}/${d}/20${y!.padStart(2, "0")}` };
+    if (y!.length !== 4) return { error: `"${value}" is not a date: write the year with four digits` };
     const month = Number(m);
     if (month < 1 || month > 12) {
       return { error: `"${value}": there is no month ${month}. Dates with slashes are read month first (MM/DD/YYYY); ${month <= 31 ? `for day ${month} of month ${Number(d)}, write ${pad(Number(d))}/${pad(month)}/${y}` : "check the cell"}` };
