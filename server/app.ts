@@ -10,6 +10,7 @@ import { securityHeaders } from "./web/security-headers.ts";
 import { compressWherePays } from "./web/compress.ts";
 import { buildRouter } from "./http/route.ts";
 import { requireSameOrigin } from "./http/same-origin.ts";
+import { privateApiAnswers } from "./http/cache-control.ts";
 import { createRateLimit, limitSpecs } from "./http/rate-limits.ts";
 import { recordAudit } from "./features/audit/repo.ts";
 import { collectRoutes } from "./routes.ts";
@@ -38,6 +39,7 @@ export async function createApp(deps: AppDeps, web: WebMode = "none"): Promise<B
   app.disable("x-powered-by");
   app.set("trust proxy", config.TRUST_PROXY);
   app.use(securityHeaders(config.NODE_ENV === "development"));
+  app.use("/api", privateApiAnswers());
   app.use(compressWherePays());
   app.use(requireSameOrigin(config.PUBLIC_URL));
   app.use(express.json({ limit: "100kb" }));

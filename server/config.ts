@@ -1,6 +1,31 @@
 import { z } from "zod";
 
 /**
+ * SESSION_SECRET signs session cookies and also keys the one-click unsubscribe links (HMAC with
+ * their own purpose prefix) and seals calendar-feed links (HKDF with their own label), so
+ * whoever knows it can forge all three. Secrets that were ever written in this repository
+ * (examples, development and test stacks, benchmarks) are public; production refuses them,
+ * and anything short or repetitive enough to guess.
+ */
+export const KNOWN_EXAMPLE_SECRETS: readonly string[] = [
+  "change-me-to-a-long-random-string",
+  "sproutline-local-session-secret-not-for-production",
+  "api-tests-session-secret-0123456789",
+  "fault-tests-session-secret-0123456789",
+  "bench-session-secret-0123456789",
+  "bench-session-secret-0123456789abcdef",
+];
+export const MIN_PRODUCTION_SECRET_LENGTH = 32;
+
+export function productionSecretProblem(secret: string): string | null {
+  if (KNOWN_EXAMPLE_SECRETS.includes(secret)) return "this is an example or development secret; generate a new one (e.g. openssl rand -base64 48)";
+  if (/change[-_ ]?me|not[-_ ]?for[-_ ]?production|example/i.test(secret)) return "this looks like a placeholder; generate a real secret (e.g. openssl rand -base64 48)";
+  if (secret.length < MIN_PRODUCTION_SECRET_LENGTH) return `must be at least ${MIN_PRODUCTION_SECRET_LENGTH} characters in production (e.g. openssl rand -base64 48)`;
+  if (new Set(secret).size < 10) return "has too few different characters to be random (e.g. openssl rand -base64 48)";
+  return null;
+}
+
+/**
  * Everything the server reads from its environment, validated once at start.
  * The *_BASE_URL settings point a real SDK at a local fake; production refuses them.
  */
@@ -53,6 +78,8 @@ const envSchema = z
         ctx.addIssue({ code: "custom", path: [key], message: "local fakes are not allowed in production" });
       }
     }
+    const secretProblem = productionSecretProblem(env.SESSION_SECRET);
+    if (secretProblem) ctx.addIssue({ code: "custom", path: ["SESSION_SECRET"], message: secretProblem });
     if (env.TWILIO_AUTH_TOKEN === "local-fake-auth-token") {
       ctx.addIssue({ code: "custom", path: ["TWILIO_AUTH_TOKEN"], message: "set real Twilio credentials in production" });
     }

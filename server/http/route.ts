@@ -1,7 +1,9 @@
 import { Router, type Request, type Response, type NextFunction } from "express";
 import type { z } from "zod";
 import type { Role } from "#shared/schemas/auth";
+import { findNul, NUL_MESSAGE } from "#shared/schemas/text";
 import { HttpError, fieldErrors } from "./errors.ts";
+import { REVALIDATE } from "./cache-control.ts";
 import type { SessionUser } from "../auth/session-user.ts";
 
 /**
@@ -36,6 +38,11 @@ export type RouteSpec<PS extends Schema | undefined = Schema | undefined, QS ext
    * action name (e.g. "plan.read"); the first path parameter names the record.
    */
   audit?: string;
+  /**
+   * A JSON read whose answer must not be kept even by the browser (server/http/cache-control.ts);
+   * other JSON reads revalidate with their ETag.
+   */
+  cache?: "no-store";
   /** Extra middleware before validation (e.g. multipart parsing). */
   before?: ((req: Request, res: Response, next: NextFunction) => void)[];
   handler: (ctx: RouteContext<Infer<PS>, Infer<QS>, Infer<BS>>) => Promise<unknown> | unknown;
@@ -48,11 +55,23 @@ export function route<PS extends Schema | undefined = undefined, QS extends Sche
   return spec as unknown as RouteSpec;
 }
 
+const invalidInput = (fields: Record<string, string>) => new HttpError(400, "invalid_input", "Some of the information is not valid.", fields);
+
+/**
+ * Every part is checked for NUL characters, with or without a schema: handlers and
+ * middleware may read the raw request, and PostgreSQL refuses NUL in text.
+ */
+function refuseNul(value: unknown, part: string) {
+  const path = findNul(value);
+  if (path) throw invalidInput({ [[part === "body" ? undefined : part, ...path.map(String)].filter(Boolean).join(".") || "_"]: NUL_MESSAGE });
+}
+
 function parsePart(schema: Schema | undefined, value: unknown, part: string) {
+  refuseNul(value, part);
   if (!schema) return undefined;
   const result = schema.safeParse(value ?? {});
   if (!result.success) {
-    throw new HttpError(400, "invalid_input", "Some of the information is not valid.", fieldErrors(result.error, part === "body" ? undefined : part));
+    throw invalidInput(fieldErrors(result.error, part === "body" ? undefined : part));
   }
   return result.data;
 }
@@ -97,7 +116,10 @@ export function buildRouter(specs: readonly RouteSpec[], options: { audit?: (ent
       const result = await spec.handler(ctx as never);
       if (res.headersSent) return;
       if (result === undefined) res.status(204).end();
-      else res.json(result);
+      else {
+        if (spec.method === "get" && spec.cache !== "no-store") res.setHeader("Cache-Control", REVALIDATE);
+        res.json(result);
+      }
     });
   }
   return router;

@@ -15,7 +15,9 @@ export function requireSameOrigin(publicUrl: string): RequestHandler {
     if (safeMethods.has(req.method)) return next();
     const origin = req.get("origin");
     const referer = req.get("referer");
-    const claimed = origin && origin !== "null" ? origin : referer ? safeOrigin(referer) : origin === "null" ? "null" : undefined;
+    // "null" is an opaque origin (sandboxed frame, data: page, some redirects): the browser will not
+    // say who started it, and a Referer beside it is not proof, since the opaque page chose it.
+    const claimed = origin ? origin : referer ? safeOrigin(referer) : undefined;
     if (claimed !== undefined && claimed !== allowed) {
       return next(new HttpError(403, "cross_site", "This request came from another site and was refused."));
     }

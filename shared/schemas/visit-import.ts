@@ -31,6 +31,7 @@ export const IMPORT_COLUMNS = [
   "grass_species",
   "lawn_condition",
   "irrigation",
+  "sprinkler_type",
   "precipitation_rate_in_per_h",
   "mowing_height_in",
   "mower_highest_in",

@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { isoDateSchema, visitSchema } from "../engine/index.ts";
+import { DATE_RANGE_MESSAGE, EARLIEST_DATE, LATEST_DATE } from "../engine/schemas/common.ts";
 
 export const WIND_DIRECTIONS = ["calm", "N", "NE", "E", "SE", "S", "SW", "W", "NW", "variable"] as const;
 
@@ -54,7 +55,11 @@ export const applicationRecordSchema = z
     windMph: windMphSchema.optional(),
     windDirection: windDirectionSchema.optional(),
     temperatureF: temperatureFSchema.optional(),
-    appliedAt: z.iso.datetime({ offset: true, error: "Give the time as an ISO date-time" }).optional(),
+    appliedAt: z.iso
+      .datetime({ offset: true, error: "Give the time as an ISO date-time" })
+      // The date part in the product's range: year 0000 fails in PostgreSQL.
+      .refine((value) => value.slice(0, 10) >= EARLIEST_DATE && value.slice(0, 10) <= LATEST_DATE, { message: DATE_RANGE_MESSAGE })
+      .optional(),
   })
   .superRefine((record, ctx) => {
     if (!record.epaRegistrationNumber && !record.stateRegistrationNumber) {

@@ -20,19 +20,15 @@ export function calendarRoutes(deps: Pick<AppDeps, "config" | "db">): RouteSpec[
       method: "get",
       path: "/api/my/calendar",
       access: ["customer"],
-      handler: async ({ user, res }) => {
-        res.set("Cache-Control", "no-store");
-        return { url: await getFeedUrl(calendar, customerIdOf(user)) };
-      },
+      // The answer is the feed's secret link.
+      cache: "no-store",
+      handler: async ({ user }) => ({ url: await getFeedUrl(calendar, customerIdOf(user)) }),
     }),
     route({
       method: "post",
       path: "/api/my/calendar/rotate",
       access: ["customer"],
-      handler: async ({ user, res }) => {
-        res.set("Cache-Control", "no-store");
-        return { url: await rotateFeed(calendar, customerIdOf(user)) };
-      },
+      handler: async ({ user }) => ({ url: await rotateFeed(calendar, customerIdOf(user)) }),
     }),
     // Public by design: calendar apps cannot sign in. The 256-bit token in the path is the key.
     // The whole last segment is one parameter ("<token>.ics"), so even "/calendar/.ics"

@@ -46,14 +46,18 @@ const toAttachment = (a: Attachment): InboundAttachment => ({
   inlineRelated: a.related === true,
 });
 
+/** Mail is not a form its sender can correct, so NUL (which PostgreSQL text cannot hold) is dropped rather than refused. */
+const withoutNul = (value: string) => (value.includes("\0") ? value.replaceAll("\0", "") : value);
+
 export async function parseInbound(source: Readable | Buffer, envelopeRecipients: readonly string[] = []): Promise<InboundEmail> {
   const parsed = await simpleParser(source, { skipHtmlToText: false, skipTextToHtml: true, skipImageLinks: true });
   const lines = parsed.headerLines;
   const deliveredTo = headerLineValues(lines, "delivered-to").flatMap((v) => v.match(addressPattern) ?? []);
   const recipients = [...envelopeRecipients, ...addresses(parsed.to), ...addresses(parsed.cc), ...deliveredTo];
-  const from = addresses(parsed.from)[0]?.toLowerCase() ?? null;
-  const text = parsed.text ?? "";
-  const messageId = parsed.messageId?.trim() || null;
+  const sender = addresses(parsed.from)[0];
+  const from = sender === undefined ? null : withoutNul(sender).toLowerCase();
+  const text = withoutNul(parsed.text ?? "");
+  const messageId = withoutNul(parsed.messageId ?? "").trim() || null;
   const externalId =
     messageId ??
     `sha256:${createHash("sha256").update([from, parsed.date?.toISOString(), parsed.subject, text].join("\n")).digest("hex")}`;
@@ -63,7 +67,7 @@ export async function parseInbound(source: Readable | Buffer, envelopeRecipients
     messageId,
     from,
     recipients: [...new Set(recipients.map((r) => r.trim()).filter(Boolean))],
-    subject: parsed.subject ?? null,
+    subject: parsed.subject === undefined ? null : withoutNul(parsed.subject),
     text,
     attachments: parsed.attachments.map(toAttachment),
     automated: isAutomated(lines),

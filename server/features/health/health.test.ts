@@ -34,7 +34,7 @@ describe("health, unknown routes and bad input", () => {
   });
 
   it("refuses to start in production with a fake configured", () => {
-    const base = { NODE_ENV: "production", DATABASE_URL: "postgres://x", SESSION_SECRET: "0123456789abcdef0123", TWILIO_AUTH_TOKEN: "real", GOOGLE_CLIENT_SECRET: "real" };
+    const base = { NODE_ENV: "production", DATABASE_URL: "postgres://x", SESSION_SECRET: "t7Qm2vX9pL4sW8kR1nB6yH3cJ5fD0gZa", TWILIO_AUTH_TOKEN: "real", GOOGLE_CLIENT_SECRET: "real" };
     expect(() => loadConfig(base)).not.toThrow();
     expect(() => loadConfig({ ...base, TWILIO_API_BASE_URL: "http://127.0.0.1:5181" })).toThrow(ConfigError);
     expect(() => loadConfig({ ...base, GOOGLE_AUTH_BASE_URL: "http://127.0.0.1:5182" })).toThrow(/fakes are not allowed/);

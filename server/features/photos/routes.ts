@@ -2,6 +2,7 @@ import { z } from "zod";
 import { bigRecordId } from "#shared/schemas/ids";
 import type { AppDeps } from "../../app.ts";
 import { notFound } from "../../http/errors.ts";
+import { REVALIDATE } from "../../http/cache-control.ts";
 import { route, type RouteSpec } from "../../http/route.ts";
 import { photoStorageFromConfig, type PhotoStorage } from "../../storage/index.ts";
 import { findPhotoKeysForUser } from "./repo.ts";
@@ -10,9 +11,6 @@ const photoParamsSchema = z.object({
   id: bigRecordId,
   size: z.enum(["large", "thumb"]),
 });
-
-/** A photo never changes under its id; a day keeps a reader's cache from holding it long after access ends. */
-const CACHE_SECONDS = 24 * 60 * 60;
 
 export function photoRoutes(deps: Pick<AppDeps, "config" | "db">, storage: PhotoStorage = photoStorageFromConfig(deps.config)): RouteSpec[] {
   return [
@@ -28,7 +26,9 @@ export function photoRoutes(deps: Pick<AppDeps, "config" | "db">, storage: Photo
         if (!data) throw notFound("That photo");
         res.set({
           "Content-Type": "image/jpeg",
-          "Cache-Control": `private, max-age=${CACHE_SECONDS}`,
+          // Revalidated like every private API answer (server/http/cache-control.ts), so a reader whose
+          // access ended cannot keep seeing it from the cache; an unchanged photo costs an empty 304.
+          "Cache-Control": REVALIDATE,
           "X-Content-Type-Options": "nosniff",
           "Content-Disposition": `inline; filename="photo-${params.id}-${params.size}.jpg"`,
         });

@@ -1,7 +1,8 @@
-import { isValidIsoDate, isValidTimeZone, SERVICES, SPECIES, type PlanInputRaw } from "#shared/engine/index";
+import { isValidTimeZone, SERVICES, SPECIES, SPRINKLER_TYPES, type PlanInputRaw, type SprinklerType } from "#shared/engine/index";
 import type { ImportColumn } from "#shared/schemas/visit-import";
 import { z } from "zod";
 import { parseContact } from "../auth/contact.ts";
+import { readCellDate } from "./cell-dates.ts";
 
 const emailSchema = z.email();
 
@@ -14,7 +15,7 @@ export type RowErrors = Partial<Record<ImportColumn | "row", string>>;
 export type LawnFacts = {
   grassType?: { species: string[] };
   lawnCondition?: string;
-  irrigation?: { kind: string; precipitationRateInPerHour?: number };
+  irrigation?: { kind: string; sprinklerType?: SprinklerType; precipitationRateInPerHour?: number };
   currentMowingHeightIn?: number;
   mowerHighestSettingIn?: number;
   expectedFirstFrost?: string;
@@ -51,6 +52,11 @@ class CellReader {
   text(column: ImportColumn, max = 200): string | null {
     const value = (this.record[column] ?? "").trim();
     if (!value) return null;
+    // Never passed on: PostgreSQL text cannot hold NUL.
+    if (value.includes("\0")) {
+      this.errors[column] = "Contains the NUL character (\\u0000); retype the cell";
+      return null;
+    }
     if (value.length > max) {
       this.errors[column] = `Keep it under ${max} characters`;
       return null;
@@ -99,13 +105,14 @@ class CellReader {
   }
 
   date(column: ImportColumn): string | undefined {
-    const value = this.text(column, 20);
+    const value = this.text(column, 30);
     if (value === null) return undefined;
-    if (!isValidIsoDate(value)) {
-      this.errors[column] = "Use a real date written YYYY-MM-DD";
+    const read = readCellDate(value);
+    if ("error" in read) {
+      this.errors[column] = read.error;
       return undefined;
     }
-    return value;
+    return read.date;
   }
 }
 
@@ -170,9 +177,14 @@ function readLawn(reader: CellReader): LawnFacts {
   const condition = reader.oneOf("lawn_condition", LAWN_CONDITIONS);
   if (condition) lawn.lawnCondition = condition;
   const irrigation = reader.oneOf("irrigation", IRRIGATION_KINDS);
+  const sprinkler = reader.oneOf("sprinkler_type", SPRINKLER_TYPES) as SprinklerType | undefined;
   const rate = reader.number("precipitation_rate_in_per_h");
-  if (irrigation) lawn.irrigation = { kind: irrigation, ...(rate !== undefined && { precipitationRateInPerHour: rate }) };
-  else if (rate !== undefined) reader.errors.irrigation = "Give the irrigation kind with a precipitation rate";
+  if (irrigation) {
+    lawn.irrigation = { kind: irrigation, ...(sprinkler && { sprinklerType: sprinkler }), ...(rate !== undefined && { precipitationRateInPerHour: rate }) };
+    if (irrigation === "none" && sprinkler) reader.errors.sprinkler_type = "A lawn without irrigation has no sprinkler: leave it blank, or give the irrigation kind";
+  } else if (rate !== undefined) reader.errors.irrigation = "Give the irrigation kind with a precipitation rate";
+  // The irrigation is stored as one piece, so a sprinkler type alone would drop the kind a known lawn has.
+  else if (sprinkler) reader.errors.irrigation = "Give the irrigation kind with a sprinkler type";
   const height = reader.number("mowing_height_in");
   if (height !== undefined) lawn.currentMowingHeightIn = height;
   const highest = reader.number("mower_highest_in");
@@ -271,6 +283,7 @@ const engineFieldColumns: [RegExp, ImportColumn][] = [
   [/^property\.grassType/, "grass_species"],
   [/^property\.lawnCondition/, "lawn_condition"],
   [/^property\.irrigation\.precipitationRateInPerHour/, "precipitation_rate_in_per_h"],
+  [/^property\.irrigation\.sprinklerType/, "sprinkler_type"],
   [/^property\.irrigation/, "irrigation"],
   [/^property\.currentMowingHeightIn/, "mowing_height_in"],
   [/^property\.mowerHighestSettingIn/, "mower_highest_in"],

@@ -183,6 +183,51 @@ describe("import", () => {
     expect(await counts()).toEqual({ customers: before.customers + 1, properties: before.properties + 1, visits: before.visits + 1, plans: before.plans + 1 });
   });
 
+  it("reads a file as US spreadsheets save it: month-first dates, mixed line endings, a byte-order mark", async () => {
+    const before = await counts();
+    const lines = toCsv([
+      good({ customer_ref: "US-1", email: `us1.${tag}@mail.example`, street: "1 Month First Way", visit_date: "09/08/2026", expected_first_frost: "10/24/2026", irrigation: "hose_end", sprinkler_type: "Oscillating", precipitation_rate_in_per_h: "" }),
+      good({ customer_ref: "US-2", email: `us2.${tag}@mail.example`, street: "2 Month First Way", visit_date: "9/9/2026", sprinkler_type: "rotor", precipitation_rate_in_per_h: "" }),
+      good({ customer_ref: "US-3", email: `us3.${tag}@mail.example`, street: "3 Month First Way", visit_date: "2026-09-10" }),
+    ]).split("\r\n");
+    // Excel's byte-order mark, then CRLF, LF and a lone CR between the lines.
+    const file = `\uFEFF${lines[0]}\r\n${lines[1]}\n${lines[2]}\r${lines[3]}\r\n`;
+    const res = await upload(boss, "/api/visit-imports", file, "us.csv").expect(200);
+    expect(res.body).toMatchObject({ total: 3, created: 3, failed: 0 });
+    expect(res.body.rows.map((r: { row: number }) => r.row)).toEqual([2, 3, 4]);
+    const [hoseEnd, rotor] = res.body.rows as { visitId: number; planId: number }[];
+    const visit = await ctx.db("service_visits").where({ id: hoseEnd!.visitId }).first("visit_date", "property_id");
+    expect(visit.visit_date).toBe("2026-09-08");
+    const lawn = (await ctx.db("properties").where({ id: visit.property_id }).first("lawn")).lawn;
+    expect(lawn).toMatchObject({ expectedFirstFrost: "2026-10-24", irrigation: { kind: "hose_end", sprinklerType: "oscillating" } });
+    expect(lawn.irrigation.precipitationRateInPerHour).toBeUndefined();
+    // The sprinkler type reaches the plan: its unmeasured rate comes from the type's range (shared/engine/tables/sprinklers.ts).
+    const summaryOf = async (planId: number) => (await ctx.db("care_plans").where({ id: planId }).first("figures")).figures.summary;
+    expect((await summaryOf(hoseEnd!.planId)).precipitationRateDefault).toMatchObject({ basis: "sprinkler_type", minInPerHour: 0.1, maxInPerHour: 0.5 });
+    expect((await summaryOf(rotor!.planId)).precipitationRateDefault).toMatchObject({ basis: "sprinkler_type", minInPerHour: 0.4, maxInPerHour: 0.8 });
+    expect(await counts()).toEqual({ customers: before.customers + 3, properties: before.properties + 3, visits: before.visits + 3, plans: before.plans + 3 });
+  });
+
+  it("names the row and the column of every wrong date and sprinkler cell", async () => {
+    const file = toCsv([
+      good({ customer_ref: "BAD-1", email: `bad1.${tag}@mail.example`, street: "1 Wrong Way", visit_date: "25/09/2026" }),
+      good({ customer_ref: "BAD-2", email: `bad2.${tag}@mail.example`, street: "2 Wrong Way", visit_date: "9/8/26", expected_first_frost: "0000-10-24" }),
+      good({ customer_ref: "BAD-3", email: `bad3.${tag}@mail.example`, street: "3 Wrong Way", sprinkler_type: "sprayer" }),
+      good({ customer_ref: "BAD-4", email: `bad4.${tag}@mail.example`, street: "4 Wrong Way", irrigation: "none", sprinkler_type: "rotor", precipitation_rate_in_per_h: "" }),
+      good({ customer_ref: "BAD-5", email: `bad5.${tag}@mail.example`, street: "5 Wrong Way", irrigation: "", sprinkler_type: "rotor", precipitation_rate_in_per_h: "" }),
+    ]);
+    const nul = toCsv([good({ customer_ref: "BAD\u00007", email: `bad7.${tag}@mail.example`, street: "7 Wrong\u0000 Way" })]).split("\r\n")[1];
+    const res = await upload(boss, "/api/visit-imports/preview", `${file}\nBAD-6,6 Wrong Way,9/8/2026\n${nul}\n`).expect(200);
+    const rows = byRow(res.body.rows);
+    expect(rows[2]!.errors).toEqual({ visit_date: expect.stringMatching(/no month 25.*month first/) });
+    expect(rows[3]!.errors).toEqual({ visit_date: "Write the year in full: 9/8/2026", expected_first_frost: "Use a date from 1900 to 2199" });
+    expect(rows[4]!.errors).toEqual({ sprinkler_type: "Use one of: fixed_spray, rotor, oscillating, impact" });
+    expect(rows[5]!.errors).toEqual({ sprinkler_type: expect.stringMatching(/without irrigation has no sprinkler/) });
+    expect(rows[6]!.errors).toEqual({ irrigation: "Give the irrigation kind with a sprinkler type" });
+    expect(rows[8]!.errors).toEqual({ street: expect.stringMatching(/NUL character/), customer_ref: expect.stringMatching(/NUL character/) });
+    expect(rows[7]!.errors.row).toMatch(/^This row has 3 cells where the header has \d+: column D \(email\) and after are missing/);
+  });
+
   it("is for managers only", async () => {
     const tech = await signInStaff(ctx, `tech.${tag}@import.example`);
     await upload(tech, "/api/visit-imports", dayFile).expect(403);
