@@ -1,5 +1,6 @@
 import type { PlanContext } from "../context.ts";
 import type { PlanWarning, WarningFinding, WarningSeverity } from "../types.ts";
+import { preEmergentHomeownerWording } from "./pre-emergent.ts";
 
 type HomeownerWording = Pick<WarningFinding, "message" | "reason"> & { severity: WarningSeverity };
 
@@ -48,6 +49,7 @@ const HOMEOWNER: Partial<Record<string, (ctx: PlanContext, finding: WarningFindi
     message: "This kind of grass comes up slowly and unevenly from seed, so the dates in your plan are estimates. Keep watering as planned.",
     reason: "Few lawns are grown from this seed, so its sprouting times are rougher than for common grasses.",
   }),
+  pre_emergent_before_seeding: preEmergentHomeownerWording,
   no_sprinkler_for_seed: (_ctx, finding) => ({
     severity: "caution",
     message: "Without a sprinkler the seed has to be kept damp by hand several times a day. A hose-end sprinkler on a timer makes that much easier.",

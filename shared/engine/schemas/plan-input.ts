@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { isValidIsoDate, toDayNumber } from "../dates.ts";
+import { PRE_EMERGENT_INGREDIENTS, PRIOR_PRE_EMERGENT_PRODUCTS } from "../tables/pre-emergent.ts";
 import { SPRINKLER_TYPES } from "../tables/sprinklers.ts";
 import { isoDateSchema, localTimeSchema, speciesSchema, timeZoneSchema } from "./common.ts";
 import { programSettingsSchema } from "./program-settings.ts";
@@ -43,6 +44,17 @@ export const productAppliedSchema = z.object({
   organic: z.boolean().optional(),
 });
 
+/**
+ * A crabgrass preventer, weed-and-feed or other pre-emergent put down in the months before a
+ * seeding (by the homeowner or anyone else): it may still stop the new seed. The date may be
+ * approximate; the active ingredient is optional because few people keep the bag.
+ */
+export const priorPreEmergentSchema = z.object({
+  product: z.enum(PRIOR_PRE_EMERGENT_PRODUCTS, { message: "Pick what was put down" }),
+  appliedOn: isoDateSchema,
+  activeIngredient: z.enum(PRE_EMERGENT_INGREDIENTS, { message: "Pick an active ingredient from the list" }).optional(),
+});
+
 export const visitSchema = z
   .object({
     date: isoDateSchema,
@@ -54,6 +66,7 @@ export const visitSchema = z
     seedRateLbPer1000: z.number().gt(0, "Must be more than 0").max(50, "Must be at most 50 lb per 1,000 ft²").optional(),
     areaFt2: z.number().gt(0, "Must be more than 0").max(5_000_000, "Must be at most 5,000,000 ft²"),
     products: z.array(productAppliedSchema).max(10).default([]),
+    priorPreEmergent: priorPreEmergentSchema.optional(),
   })
   .superRefine((visit, ctx) => {
     // Cross-field checks run even when single fields failed; guard the shapes.
@@ -62,6 +75,10 @@ export const visitSchema = z
     if (seeding && visit.seedMix.length === 0) {
       // The plan's watering and mowing dates depend on the species sown.
       ctx.addIssue({ code: "custom", path: ["seedMix"], message: "List the seed used for this seeding" });
+    }
+    const prior = visit.priorPreEmergent;
+    if (prior && isValidIsoDate(prior.appliedOn) && isValidIsoDate(visit.date) && toDayNumber(prior.appliedOn) > toDayNumber(visit.date)) {
+      ctx.addIssue({ code: "custom", path: ["priorPreEmergent", "appliedOn"], message: "Must be on or before the visit date" });
     }
     if (visit.seedMix.length === 0) return;
     const total = visit.seedMix.reduce((sum, entry) => sum + (typeof entry?.percent === "number" ? entry.percent : 0), 0);
@@ -159,6 +176,7 @@ export const planInputSchema = z
 
 export type SeedMixEntry = z.output<typeof seedMixEntrySchema>;
 export type ProductApplied = z.output<typeof productAppliedSchema>;
+export type PriorPreEmergent = z.output<typeof priorPreEmergentSchema>;
 export type Visit = z.output<typeof visitSchema>;
 export type Irrigation = z.output<typeof irrigationSchema>;
 export type Property = z.output<typeof propertySchema>;
