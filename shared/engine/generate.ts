@@ -1,6 +1,7 @@
 import { buildContext, type PlanContext } from "./context.ts";
 import { checkInSteps } from "./rules/check-ins.ts";
 import { feedingSteps } from "./rules/feeding.ts";
+import { feedingProgramFindings, feedingProgramSteps } from "./rules/feeding-program.ts";
 import { holdOffEndSteps, holdOffsFor, holdOffWindows } from "./rules/hold-offs.ts";
 import { mowingSteps } from "./rules/mowing.ts";
 import { aerationCoreSteps, prepSteps } from "./rules/prep.ts";
@@ -8,6 +9,7 @@ import { leafCleanupSteps, thatchCleanupSteps } from "./rules/seasonal.ts";
 import { nitrogenWarnings } from "./rules/nitrogen-warnings.ts";
 import { warningsForAudiences } from "./rules/audiences.ts";
 import { planWarnings } from "./rules/warnings.ts";
+import { priorPreEmergentFindings } from "./rules/pre-emergent.ts";
 import { wateringSteps } from "./rules/watering.ts";
 import { hashInput } from "./hash.ts";
 import type { PlanInput } from "./schemas/plan-input.ts";
@@ -17,7 +19,7 @@ import { CAUTION_IDS, CAUTIONS, type CautionId } from "./tables/cautions.ts";
 import type { HoldOff, PhaseRange, Plan, PlanStep, PlanWarning } from "./types.ts";
 
 /** Bump when the same input would produce a different plan, so stored plans can be told apart. */
-export const ENGINE_VERSION = 2;
+export const ENGINE_VERSION = 3;
 
 /** Steps the homeowner reported skipping keep their place in the plan, marked skipped. */
 function applySkips(ctx: PlanContext, steps: PlanStep[]): PlanStep[] {
@@ -62,7 +64,7 @@ function cautionsUsed(groups: readonly (readonly { cautions: readonly CautionId[
  */
 export function visitWarnings(input: PlanInput): PlanWarning[] {
   const ctx = buildContext(input);
-  return warningsForAudiences(ctx, planWarnings(ctx));
+  return warningsForAudiences(ctx, [...planWarnings(ctx), ...priorPreEmergentFindings(ctx), ...feedingProgramFindings(ctx)]);
 }
 
 /**
@@ -84,6 +86,7 @@ export function generatePlan(input: PlanInput): Plan {
         ...wateringSteps(ctx),
         ...mowingSteps(ctx),
         ...feedingSteps(ctx, windows),
+        ...feedingProgramSteps(ctx),
         ...holdOffEndSteps(ctx, windows),
         ...leafCleanupSteps(ctx),
         ...checkInSteps(ctx),
@@ -108,7 +111,7 @@ export function generatePlan(input: PlanInput): Plan {
     prepSteps: prep,
     steps,
     holdOffs,
-    warnings: warningsForAudiences(ctx, [...planWarnings(ctx), ...nitrogenWarnings(ctx)]),
+    warnings: warningsForAudiences(ctx, [...planWarnings(ctx), ...nitrogenWarnings(ctx), ...priorPreEmergentFindings(ctx), ...feedingProgramFindings(ctx)]),
     summary: calculatorSummary(ctx),
     cautions: cautionsUsed([prep, steps, holdOffs]),
   };
