@@ -7,10 +7,12 @@ import { useLogVisit } from "./api/log-visit.ts";
 import { ConditionsFields } from "./components/conditions-fields.tsx";
 import { ErrorSummary } from "./components/error-summary.tsx";
 import { FormSection } from "./components/form-section.tsx";
+import { PriorPreEmergentFields } from "./components/prior-pre-emergent-fields.tsx";
 import { ProductFields } from "./components/product-fields.tsx";
 import { PropertyPicker } from "./components/property-picker.tsx";
 import { RegulatedApplicationFields } from "./components/regulated-application-fields.tsx";
 import { SeedFields } from "./components/seed-fields.tsx";
+import { ThickLawnNotice } from "./components/thick-lawn-notice.tsx";
 import { VisitBasics } from "./components/visit-basics.tsx";
 import { VisitSaved, type SavedVisit } from "./components/visit-saved.tsx";
 import { VisitWarnings } from "./components/visit-warnings.tsx";
@@ -117,7 +119,9 @@ export function VisitLogRoute() {
               <PropertyPicker chosen={lawn} onChoose={chooseLawn} error={errors.propertyId} />
             </FormSection>
             <VisitBasics />
+            <ThickLawnNotice propertyId={lawn?.propertyId ?? null} />
             <SeedFields />
+            <PriorPreEmergentFields />
             <ProductFields />
             <VisitWarnings propertyId={lawn?.propertyId ?? null} />
             <ConditionsFields />
