@@ -24,6 +24,8 @@ export {
   SERVICES,
   SEEDING_SERVICES,
   SEED_MIX_SUM_TOLERANCE,
+  LAWN_CONDITIONS,
+  type LawnCondition,
   type Service,
   type SeedMixEntry,
   type ProductApplied,

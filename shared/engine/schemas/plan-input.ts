@@ -100,6 +100,9 @@ export const visitSchema = z
 
 const round1 = (x: number) => Math.round(x * 10) / 10;
 
+export const LAWN_CONDITIONS = ["thin", "bare", "thick_dormant", "thick"] as const;
+export type LawnCondition = (typeof LAWN_CONDITIONS)[number];
+
 export const irrigationSchema = z.object({
   kind: z.enum(["in_ground", "hose_end", "none"]),
   /** Optional: without it an in-ground system uses the program's default rate, a hose-end sprinkler the hose-end range. */
@@ -114,7 +117,7 @@ export const propertySchema = z
       species: z.array(speciesSchema).max(9).default([]),
       season: z.enum(["cool", "warm"]).optional(),
     }),
-    lawnCondition: z.enum(["thin", "bare", "thick_dormant", "thick"]),
+    lawnCondition: z.enum(LAWN_CONDITIONS),
     irrigation: irrigationSchema,
     currentMowingHeightIn: z.number().min(0.5, "Must be at least 0.5 in").max(6, "Must be at most 6 in"),
     mowerHighestSettingIn: z.number().min(1, "Must be at least 1 in").max(6, "Must be at most 6 in"),

@@ -1,6 +1,7 @@
 import { useEffect, useState } from "react";
 import { FormProvider, useForm } from "react-hook-form";
 import { useQueryClient } from "@tanstack/react-query";
+import { LAWN_CONDITIONS, type LawnCondition } from "#shared/engine/index";
 import { Button, Notice, Page, TextAreaField, isApiRequestError, useSignedInUser } from "#shared/ui/index";
 import { propertyQueryOptions } from "./api/get-property.ts";
 import { useLogVisit } from "./api/log-visit.ts";
@@ -12,7 +13,7 @@ import { ProductFields } from "./components/product-fields.tsx";
 import { PropertyPicker } from "./components/property-picker.tsx";
 import { RegulatedApplicationFields } from "./components/regulated-application-fields.tsx";
 import { SeedFields } from "./components/seed-fields.tsx";
-import { ThickLawnNotice } from "./components/thick-lawn-notice.tsx";
+import { LawnToday } from "./components/lawn-today.tsx";
 import { VisitBasics } from "./components/visit-basics.tsx";
 import { VisitSaved, type SavedVisit } from "./components/visit-saved.tsx";
 import { VisitWarnings } from "./components/visit-warnings.tsx";
@@ -62,6 +63,9 @@ export function VisitLogRoute() {
       .fetchQuery(propertyQueryOptions(next.propertyId))
       .then((property) => {
         if (!form.getValues("visit.areaFt2") && property.lawnAreaFt2) form.setValue("visit.areaFt2", String(property.lawnAreaFt2), { shouldDirty: true });
+        // Likewise the lawn's recorded condition, for the technician to confirm or correct.
+        const recorded = property.lawn.lawnCondition;
+        if (!form.getValues("lawnCondition") && isLawnCondition(recorded)) form.setValue("lawnCondition", recorded, { shouldDirty: true });
       })
       .catch(() => undefined);
   };
@@ -119,7 +123,7 @@ export function VisitLogRoute() {
               <PropertyPicker chosen={lawn} onChoose={chooseLawn} error={errors.propertyId} />
             </FormSection>
             <VisitBasics />
-            <ThickLawnNotice propertyId={lawn?.propertyId ?? null} />
+            <LawnToday />
             <SeedFields />
             <PriorPreEmergentFields />
             <ProductFields />
@@ -152,3 +156,5 @@ function focusFirst(paths: string[]) {
   target?.scrollIntoView({ block: "center" });
   target?.focus({ preventScroll: true });
 }
+
+const isLawnCondition = (value: unknown): value is LawnCondition => (LAWN_CONDITIONS as readonly unknown[]).includes(value);

@@ -1,5 +1,6 @@
 const LABELS: Record<string, string> = {
   propertyId: "Customer's lawn",
+  lawnCondition: "Lawn condition today",
   "visit.date": "Date",
   "visit.services": "Services done",
   "visit.areaFt2": "Area treated",

@@ -1,4 +1,4 @@
-import type { PreEmergentIngredient, PriorPreEmergentProduct, Service, Species } from "#shared/engine/index";
+import type { LawnCondition, PreEmergentIngredient, PriorPreEmergentProduct, Service, Species } from "#shared/engine/index";
 import { localToday } from "#shared/ui/index";
 import { WIND_DIRECTIONS } from "#shared/schemas/visits";
 
@@ -56,6 +56,8 @@ export interface ApplicationRecord {
 
 export interface VisitFormValues {
   propertyId: string;
+  /** The lawn as found today ("" until the lawn's recorded condition is filled in); absent in older drafts. */
+  lawnCondition?: LawnCondition | "";
   visit: {
     date: string;
     services: Service[];
@@ -91,6 +93,7 @@ export const emptyApplication = (): ApplicationRecord => ({
 export function defaultVisitForm(applicatorName = ""): VisitFormValues {
   return {
     propertyId: "",
+    lawnCondition: "",
     visit: { date: localToday(), services: [], seedMix: [], seedRateLbPer1000: "", areaFt2: "", products: [], priorPreEmergent: emptyPriorPreEmergent() },
     seedBagLb: "50",
     conditions: { temperatureF: "", windMph: "", windDirection: "" },

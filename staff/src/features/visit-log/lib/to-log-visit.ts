@@ -104,6 +104,7 @@ export function checkVisitForm(values: VisitFormValues): CheckedVisit {
 
   const raw = {
     propertyId: Number(values.propertyId) || undefined,
+    lawnCondition: values.lawnCondition || undefined,
     visit: {
       date: v.date,
       services: v.services,

@@ -50,7 +50,8 @@ export function warningsForVisit(values: VisitFormValues, property: PropertyDeta
         })),
         priorPreEmergent: priorPreEmergentBody(v),
       },
-      property: { ...property.lawn, timeZone: property.timeZone },
+      // The condition picked on the form is what the saved visit records, so the plan reads it.
+      property: { ...property.lawn, ...(values.lawnCondition ? { lawnCondition: values.lawnCondition } : {}), timeZone: property.timeZone },
     };
   } catch (error) {
     if (error instanceof Incomplete) return { state: "incomplete" };
