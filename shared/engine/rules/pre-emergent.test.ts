@@ -1,5 +1,9 @@
+import fc from "fast-check";
 import { describe, expect, it } from "vitest";
+import { addDays } from "../dates.ts";
 import { generatePlan, visitWarnings } from "../generate.ts";
+import { violatesHoldOff } from "./hold-offs.ts";
+import { PRE_EMERGENT_INGREDIENTS, PRIOR_PRE_EMERGENT_PRODUCTS } from "../tables/pre-emergent.ts";
 import { parsePlanInput } from "../schemas/parse.ts";
 import { valid, withChanges } from "../testing/fixtures.ts";
 import type { PlanWarning } from "../types.ts";
@@ -109,3 +113,30 @@ describe("a pre-emergent put down before the seeding", () => {
     expect(unknown.ok ? null : unknown.fields["visit.priorPreEmergent.product"]).toBe("Pick what was put down");
   });
 });
+
+describe("a pre-emergent before seeding, for any product, ingredient and date up to 200 days before", () => {
+  it("holds off more seed exactly while a warning says it may be active, from the day it went down, and no step falls inside a hold-off it is restricted by", () => {
+    fc.assert(
+      fc.property(
+        fc.constantFrom(...PRIOR_PRE_EMERGENT_PRODUCTS),
+        fc.option(fc.constantFrom(...PRE_EMERGENT_INGREDIENTS), { nil: undefined }),
+        fc.integer({ min: 0, max: 200 }),
+        (product, activeIngredient, daysBefore) => {
+          const appliedOn = addDays("2026-09-10", -daysBefore);
+          const plan = planWith(activeIngredient ? { product, appliedOn, activeIngredient } : { product, appliedOn });
+          const hold = plan.holdOffs.find((h) => h.kind === "new_seed");
+          const warned = plan.warnings.some((w) => w.code === "pre_emergent_before_seeding" && w.audience === "crew");
+          expect(warned).toBe(hold !== undefined);
+          expect(warned).toBe(plan.warnings.some((w) => w.code === "pre_emergent_before_seeding" && w.audience === "homeowner"));
+          if (hold) {
+            expect(hold.start).toBe(appliedOn);
+            expect(hold.end >= "2026-09-10").toBe(true);
+          }
+          for (const step of plan.steps) expect(violatesHoldOff(step, plan.holdOffs)).toBe(false);
+        },
+      ),
+      { numRuns: 150 },
+    );
+  });
+});
+
