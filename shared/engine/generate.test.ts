@@ -168,20 +168,6 @@ describe("feeding and hold-offs", () => {
     const raw = withChanges({ visit: { services: ["aeration"], seedMix: [], seedRateLbPer1000: undefined } });
     expect(planFor(raw).holdOffs).toEqual([]);
   });
-
-  it("plans the second autumn feeding of a thick cool-season lawn from the N already applied (2 lb N over autumn, common practice)", () => {
-    const raw = withChanges({
-      visit: {
-        services: ["fertiliser_only"],
-        seedMix: [],
-        seedRateLbPer1000: undefined,
-        products: [{ name: "Fall feed 24-0-10", analysis: { n: 24, p: 0, k: 10 }, rateLbPer1000: 4 }],
-      },
-      property: { lawnCondition: "thick" },
-    });
-    // 4 lb × 24 % = 0.96 lb N applied → 1.04 left → one more feeding capped at 1 lb (UMN #764665).
-    expect(planFor(raw).steps.find((s) => s.key === "feed:autumn_split")?.feed?.nitrogenLbPer1000).toBe(1);
-  });
 });
 
 describe("first frost", () => {

@@ -1,6 +1,7 @@
 import { buildContext, type PlanContext } from "./context.ts";
 import { checkInSteps } from "./rules/check-ins.ts";
 import { feedingSteps } from "./rules/feeding.ts";
+import { feedingProgramFindings, feedingProgramSteps } from "./rules/feeding-program.ts";
 import { holdOffEndSteps, holdOffsFor, holdOffWindows } from "./rules/hold-offs.ts";
 import { mowingSteps } from "./rules/mowing.ts";
 import { aerationCoreSteps, prepSteps } from "./rules/prep.ts";
@@ -9,6 +10,7 @@ import { nitrogenWarnings } from "./rules/nitrogen-warnings.ts";
 import { applyPlaceRules, placeRuleFindings } from "./rules/place-rules.ts";
 import { warningsForAudiences } from "./rules/audiences.ts";
 import { planWarnings } from "./rules/warnings.ts";
+import { priorPreEmergentFindings } from "./rules/pre-emergent.ts";
 import { wateringSteps } from "./rules/watering.ts";
 import { warmSeasonWarnings } from "./rules/warm-season.ts";
 import { frozenGroundWatering, seasonFeedCutoff } from "./rules/season.ts";
@@ -76,7 +78,7 @@ function cautionsUsed(groups: readonly (readonly { cautions: readonly CautionId[
  */
 export function visitWarnings(input: PlanInput): PlanWarning[] {
   const ctx = buildContext(input);
-  return warningsForAudiences(ctx, [...planWarnings(ctx), ...warmSeasonWarnings(ctx), ...placeRuleFindings(ctx)]);
+  return warningsForAudiences(ctx, [...planWarnings(ctx), ...warmSeasonWarnings(ctx), ...placeRuleFindings(ctx), ...priorPreEmergentFindings(ctx), ...feedingProgramFindings(ctx)]);
 }
 
 /**
@@ -100,6 +102,7 @@ export function generatePlan(input: PlanInput): Plan {
           ...wateringSteps(ctx),
           ...mowingSteps(ctx),
           ...feedingSteps(ctx, windows),
+          ...feedingProgramSteps(ctx),
           ...holdOffEndSteps(ctx, windows),
           ...leafCleanupSteps(ctx),
           ...checkInSteps(ctx),
@@ -127,7 +130,14 @@ export function generatePlan(input: PlanInput): Plan {
     prepSteps: prep,
     steps,
     holdOffs,
-    warnings: warningsForAudiences(ctx, [...planWarnings(ctx), ...nitrogenWarnings(ctx), ...warmSeasonWarnings(ctx), ...placeRuleFindings(ctx)]),
+    warnings: warningsForAudiences(ctx, [
+      ...planWarnings(ctx),
+      ...nitrogenWarnings(ctx),
+      ...warmSeasonWarnings(ctx),
+      ...placeRuleFindings(ctx),
+      ...priorPreEmergentFindings(ctx),
+      ...feedingProgramFindings(ctx),
+    ]),
     summary: calculatorSummary(ctx),
     cautions: cautionsUsed([prep, steps, holdOffs]),
   };

@@ -24,9 +24,12 @@ export {
   SERVICES,
   SEEDING_SERVICES,
   SEED_MIX_SUM_TOLERANCE,
+  LAWN_CONDITIONS,
+  type LawnCondition,
   type Service,
   type SeedMixEntry,
   type ProductApplied,
+  type PriorPreEmergent,
   type Visit,
   type Irrigation,
   type Property,
@@ -66,6 +69,13 @@ export { SOURCES } from "./tables/sources.ts";
 export type { Provenance, Sourced, SourcedRange, Why } from "./tables/provenance.ts";
 export { SPRINKLER_TYPES, SPRINKLER_DEFAULTS, HOSE_END_DEFAULT, type SprinklerType, type SprinklerDefault } from "./tables/sprinklers.ts";
 export { FROST_RULE, hemisphereOfZone, type Hemisphere } from "./tables/timing.ts";
+export {
+  PRIOR_PRE_EMERGENT_PRODUCTS,
+  PRE_EMERGENT_INGREDIENTS,
+  PRE_EMERGENT_INGREDIENT_NAMES,
+  type PriorPreEmergentProduct,
+  type PreEmergentIngredient,
+} from "./tables/pre-emergent.ts";
 export { addDays, daysBetween, isValidIsoDate, isValidLocalTime, type IsoDate } from "./dates.ts";
 export { isRealLocalTime, nearestRealLocalTime, isValidTimeZone } from "./zone-time.ts";
 export { mowDownStages } from "./rules/prep.ts";

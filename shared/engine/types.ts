@@ -23,7 +23,9 @@ export type HoldOffKind =
   | "broadleaf_herbicide"
   | "crabgrass_pre_emergent"
   | "high_n_quick_release"
-  | "heavy_traffic";
+  | "heavy_traffic"
+  /** Before seeding: a pre-emergent put down earlier may still stop more seed (rules/pre-emergent.ts). */
+  | "new_seed";
 
 export type StepState = "done" | "skipped";
 

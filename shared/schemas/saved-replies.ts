@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { SPECIES, SPECIES_FACTS, speciesSchema, type Species } from "../engine/index.ts";
 
 /** What a saved reply may say about the customer and their plan; filled in when a technician uses it. */
 export const SAVED_REPLY_PLACEHOLDERS = ["firstName", "visitDate", "firstMowDate", "companyName"] as const;
@@ -47,5 +48,46 @@ export type SavedReply = z.infer<typeof savedReplySchema>;
 
 export const savedReplyListSchema = z.object({ replies: z.array(savedReplySchema) });
 export const savedReplyResponseSchema = z.object({ reply: savedReplySchema });
-/** `missing` names placeholders the plan has no value for yet (e.g. no first mow date); they read as a plain phrase. */
-export const renderedReplySchema = z.object({ text: z.string(), missing: z.array(z.enum(SAVED_REPLY_PLACEHOLDERS)) });
+/**
+ * `missing` names placeholders the plan has no value for yet (e.g. no first mow date); they read as a plain phrase.
+ * `speciesNotInLawn`: grasses the reply names that neither the lawn nor the visit's seed mix has, for the
+ * technician to fix before sending.
+ */
+export const renderedReplySchema = z.object({
+  text: z.string(),
+  missing: z.array(z.enum(SAVED_REPLY_PLACEHOLDERS)),
+  speciesNotInLawn: z.array(speciesSchema),
+});
+
+/*
+ * How people write each grass in a reply. "Fescue" alone could be tall or fine fescue, so it
+ * names neither; "annual ryegrass" and "annual bluegrass" are other plants.
+ */
+const SPECIES_WORDS: Readonly<Record<Species, readonly string[]>> = {
+  tall_fescue: ["tall fescue"],
+  kentucky_bluegrass: ["kentucky bluegrass", "(?<!annual )bluegrass"],
+  perennial_ryegrass: ["perennial ryegrass", "perennial rye", "(?<!annual )ryegrass", "(?<!annual )rye grass"],
+  fine_fescue: ["fine fescues?", "creeping red fescue", "red fescue", "chewings fescue", "hard fescue"],
+  bermudagrass: ["bermudagrass", "bermuda grass", "bermuda"],
+  zoysiagrass: ["zoysiagrass", "zoysia"],
+  st_augustinegrass: ["st\\.? ?augustine(?:grass)?", "saint augustine(?:grass)?"],
+  centipedegrass: ["centipedegrass", "centipede grass", "centipede"],
+  bahiagrass: ["bahiagrass", "bahia grass", "bahia"],
+};
+const SPECIES_PATTERNS = SPECIES.map((species) => ({ species, pattern: new RegExp(`\\b(?:${SPECIES_WORDS[species].join("|")})\\b`, "i") }));
+
+/** The grasses a reply's text names, in the engine's order. */
+export function speciesNamedIn(text: string): Species[] {
+  return SPECIES_PATTERNS.filter(({ pattern }) => pattern.test(text)).map(({ species }) => species);
+}
+
+/**
+ * Grasses a reply names that this lawn doesn't have. The lawn's species and the visit's seed mix
+ * count; a lawn recorded only as cool- or warm-season flags grasses of the other season; a lawn
+ * with neither flags nothing, since nothing is known to contradict.
+ */
+export function speciesNotInLawn(text: string, lawn: { species: readonly Species[]; season?: "cool" | "warm" }): Species[] {
+  const named = speciesNamedIn(text);
+  if (lawn.species.length > 0) return named.filter((s) => !lawn.species.includes(s));
+  return lawn.season ? named.filter((s) => SPECIES_FACTS[s].season !== lawn.season) : [];
+}

@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { isoDateSchema, visitSchema } from "../engine/index.ts";
+import { LAWN_CONDITIONS, isoDateSchema, visitSchema } from "../engine/index.ts";
 import { DATE_RANGE_MESSAGE, EARLIEST_DATE, LATEST_DATE } from "../engine/schemas/common.ts";
 
 export const WIND_DIRECTIONS = ["calm", "N", "NE", "E", "SE", "S", "SW", "W", "NW", "variable"] as const;
@@ -71,6 +71,8 @@ export type ApplicationRecord = z.infer<typeof applicationRecordSchema>;
 /** Logging a visit: the engine's visit fields plus which lawn, the conditions, a regulated-application record and notes. */
 export const logVisitSchema = z.object({
   propertyId: z.number().int().positive(),
+  /** The lawn as the crew found it today; when given it becomes the lawn's recorded condition, before the plan is made. */
+  lawnCondition: z.enum(LAWN_CONDITIONS, { message: "Pick the lawn's condition from the list" }).optional(),
   visit: visitSchema,
   conditions: visitConditionsSchema.optional(),
   applicationRecord: applicationRecordSchema.optional(),

@@ -19,6 +19,7 @@ const holdOffTitles: Record<string, string> = {
   crabgrass_pre_emergent: "No crabgrass pre-emergent",
   high_n_quick_release: "No high-nitrogen quick-release feed",
   heavy_traffic: "Keep heavy traffic off the new grass",
+  new_seed: "No more seed: the earlier weed preventer may still be active",
 };
 const holdOffTitle = (kind: string) => holdOffTitles[kind] ?? `Hold off: ${kind.replaceAll("_", " ")}`;
 

@@ -46,10 +46,13 @@ export async function planFacts(db: Db, planId: number) {
     .join("customers as c", "c.id", "p.customer_id")
     .join("companies as co", "co.id", "c.company_id")
     .where("cp.id", planId)
-    .first<{ first_name: string; visit_date: string; first_mow_date: string | null; company_name: string }>(
+    .first<{ first_name: string; visit_date: string; first_mow_date: string | null; company_name: string; grass_type: unknown; seed_mix: unknown }>(
       "c.first_name",
       "v.visit_date",
       db.raw("cp.figures -> 'meta' ->> 'firstMowDate' as first_mow_date"),
       "co.name as company_name",
+      // What the lawn grows and what was sown: a reply naming another grass gets flagged.
+      db.raw("p.lawn -> 'grassType' as grass_type"),
+      db.raw("v.details -> 'seedMix' as seed_mix"),
     );
 }

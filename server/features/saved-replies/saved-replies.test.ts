@@ -74,6 +74,16 @@ describe("saved replies", () => {
     const mow = ruthPlan.firstMowDate ? spokenDate(ruthPlan.firstMowDate) : "(date to be confirmed)";
     expect(res.body.text).toBe(`Hi Ruth! Seeded ${spokenDate(ruthPlan.visitDate)}, mow ${mow}. — Cobblefield Turf Care`);
     expect(res.body.missing).toEqual(ruthPlan.firstMowDate ? [] : ["firstMowDate"]);
+    expect(res.body.speciesNotInLawn).toEqual([]);
+  });
+
+  it("names the grasses a reply mentions that the plan's lawn and seed mix don't have", async () => {
+    // Ruth's lawn is tall fescue, overseeded with tall fescue (seeds/data/demo-company.ts).
+    const body = "Hi {{firstName}}, your tall fescue and bluegrass are up. Bermuda grass and zoysia wait for summer.";
+    const created = await dana.post("/api/saved-replies").send({ title: title("Grasses"), body }).expect(201);
+    const res = await marco.post(`/api/saved-replies/${created.body.reply.id}/render`).send({ planId: ruthPlanId }).expect(200);
+    expect(res.body.speciesNotInLawn).toEqual(["kentucky_bluegrass", "bermudagrass", "zoysiagrass"]);
+    expect(res.body.text).toMatch(/^Hi Ruth, your tall fescue/);
   });
 
   it("answers 404 for another company's plan or reply, and 403 to customers", async () => {

@@ -1,4 +1,6 @@
-import { fillPlaceholders, type SavedReplyInput, type SavedReplyPlaceholder } from "#shared/schemas/saved-replies";
+import { z } from "zod";
+import { speciesSchema, type Species } from "#shared/engine/index";
+import { fillPlaceholders, speciesNotInLawn, type SavedReplyInput, type SavedReplyPlaceholder } from "#shared/schemas/saved-replies";
 import type { SessionUser } from "../../auth/session-user.ts";
 import type { Db } from "../../db.ts";
 import { HttpError, notFound } from "../../http/errors.ts";
@@ -34,8 +36,27 @@ export async function updateReply(db: Db, user: SessionUser, id: number, input: 
   return (await repo.findReply(db, user.companyId, id))!;
 }
 
+/*
+ * The lawn's stored facts are checked by the engine's parser only when a plan is made; read just
+ * the grass names here and skip anything unexpected rather than fail the reply.
+ */
+const storedGrassSchema = z.object({ species: z.array(z.unknown()).catch([]), season: z.enum(["cool", "warm"]).optional().catch(undefined) }).catch({ species: [] });
+const storedSeedMixSchema = z.array(z.object({ species: z.unknown() }).catch({ species: null })).catch([]);
+
+function lawnGrasses(grassType: unknown, seedMix: unknown): { species: Species[]; season?: "cool" | "warm" } {
+  const grass = storedGrassSchema.parse(grassType ?? {});
+  const named = [...grass.species, ...storedSeedMixSchema.parse(seedMix ?? []).map((e) => e.species)];
+  const species = [...new Set(named.flatMap((s) => (speciesSchema.safeParse(s).success ? [s as Species] : [])))];
+  return grass.season ? { species, season: grass.season } : { species };
+}
+
 /** The reply's text for one customer's plan; a reply or plan of another company is "not found". */
-export async function renderReply(db: Db, user: SessionUser, replyId: number, planId: number): Promise<{ text: string; missing: SavedReplyPlaceholder[] }> {
+export async function renderReply(
+  db: Db,
+  user: SessionUser,
+  replyId: number,
+  planId: number,
+): Promise<{ text: string; missing: SavedReplyPlaceholder[]; speciesNotInLawn: Species[] }> {
   const reply = await repo.findReply(db, user.companyId, replyId);
   if (!reply) throw notFound("That saved reply");
   await findPlanForUser(db, user, planId);
@@ -47,5 +68,5 @@ export async function renderReply(db: Db, user: SessionUser, replyId: number, pl
     firstMowDate: facts.first_mow_date ? spokenDate(facts.first_mow_date) : NO_DATE_YET,
     companyName: facts.company_name,
   });
-  return { text, missing };
+  return { text, missing, speciesNotInLawn: speciesNotInLawn(reply.body, lawnGrasses(facts.grass_type, facts.seed_mix)) };
 }

@@ -6,7 +6,7 @@ import { route, type RouteSpec } from "../../http/route.ts";
 import { findInCompany } from "../properties/repo.ts";
 import { createPlanForVisit, regeneratePlan, type PlanChangeHook } from "../plans/service.ts";
 import { planIdOfVisit } from "../plans/plans-repo.ts";
-import { insertVisit, loadVisitWithProperty, moveVisit } from "./repo.ts";
+import { insertVisit, loadVisitWithProperty, moveVisit, recordLawnCondition } from "./repo.ts";
 import { noticeOfNewPlan } from "../notices/service.ts";
 
 const staff = ["technician", "manager"] as const;
@@ -25,6 +25,7 @@ export function visitRoutes(deps: AppDeps, onChange?: PlanChangeHook): RouteSpec
         const { date, services, ...details } = body.visit;
         // The visit and its whole plan land together or not at all.
         const created = await db.transaction(async (trx) => {
+          if (body.lawnCondition) await recordLawnCondition(trx, property.id, body.lawnCondition);
           const visitId = await insertVisit(trx, {
             propertyId: property.id,
             technicianId: user.role === "technician" ? user.id : null,

@@ -3,6 +3,7 @@ import request from "supertest";
 import { addDays } from "#shared/engine/index";
 import { createTestContext, signInStaff, type TestContext } from "../../test/harness.ts";
 import { localDateAt } from "../../lib/local-date.ts";
+import { coolSeasonLawn, createCustomer } from "../follow-ups/testing/isolated-company.ts";
 
 let ctx: TestContext;
 let technician: ReturnType<typeof request.agent>;
@@ -87,5 +88,67 @@ describe("regulated application record", () => {
     const res = await technician.post("/api/visits").send(body({ applicationRecord: { ...noNumbers, stateRegistrationNumber: "  " } }));
     expect(res.status).toBe(400);
     expect(res.body.error.fields["applicationRecord.epaRegistrationNumber"]).toMatch(/registration number/);
+  });
+});
+
+describe("what the visit form asks that decides the plan", () => {
+  it("records the lawn's condition as found, keeps the weed preventer put down before and the organic tick, and the plan follows them", async () => {
+    const company = await ctx.db("customers").where({ id: ruthId }).first<{ company_id: number }>("company_id");
+    const lawnOwner = await createCustomer(ctx.db, company!.company_id, { first: "Thea", last: "Thick" });
+    // The fixture's fixed frost date may be before today's visit, which the engine refuses.
+    const { expectedFirstFrost: _frost, ...lawnFacts } = coolSeasonLawn;
+    await ctx.db("properties").where({ id: lawnOwner.propertyId }).update({ lawn: JSON.stringify(lawnFacts) });
+    const visitDate = addDays(localDateAt("America/New_York"), -2);
+    const visit = {
+      date: visitDate,
+      services: ["overseeding"],
+      seedMix: [{ species: "tall_fescue", percent: 100, purityPct: 98, germinationPct: 90 }],
+      seedRateLbPer1000: 5,
+      areaFt2: 5000,
+      products: [{ name: "Milorganite 6-4-0", analysis: { n: 6, p: 4, k: 0 }, rateLbPer1000: 8, organic: true }],
+      // Six weeks before: inside a crabgrass preventer's usual 8–16 weeks (from memory).
+      priorPreEmergent: { product: "crabgrass_preventer", appliedOn: addDays(visitDate, -42) },
+    };
+    const res = await technician
+      .post("/api/visits")
+      .send({ propertyId: lawnOwner.propertyId, lawnCondition: "thick", visit })
+      .expect(201);
+    const { visitId, planId } = res.body as { visitId: number; planId: number };
+
+    const lawn = await ctx.db("properties").where({ id: lawnOwner.propertyId }).first<{ lawn: Record<string, unknown> }>("lawn");
+    expect(lawn!.lawn).toEqual({ ...lawnFacts, lawnCondition: "thick" });
+    const stored = await ctx.db("service_visits").where({ id: visitId }).first<{ details: Record<string, unknown> }>("details");
+    expect(stored!.details.priorPreEmergent).toEqual(visit.priorPreEmergent);
+    expect((stored!.details.products as { organic?: boolean }[])[0]?.organic).toBe(true);
+
+    const plan = (await technician.get(`/api/plans/${planId}`).expect(200)).body as {
+      plan: { warnings: { code: string; audience: string }[]; holdOffs: { kind: string; start: string }[]; steps: { key: string }[] };
+    };
+    const codes = plan.plan.warnings.map((w) => `${w.audience}:${w.code}`);
+    expect(codes).toEqual(expect.arrayContaining(["crew:pre_emergent_before_seeding", "homeowner:pre_emergent_before_seeding", "crew:thick_lawn_feeding_program"]));
+    expect(plan.plan.holdOffs.find((h) => h.kind === "new_seed")?.start).toBe(visit.priorPreEmergent.appliedOn);
+    // The organic product counts as the starter (Nebraska Extension 2021: "starter or organic"), so none is added.
+    expect(plan.plan.steps.some((s) => s.key === "feed:starter")).toBe(false);
+  });
+
+  it("refuses a lawn condition not on the list, and a weed preventer dated after the visit", async () => {
+    const visitDate = addDays(localDateAt("America/New_York"), -2);
+    const res = await technician.post("/api/visits").send({
+      propertyId: ruthPropertyId,
+      lawnCondition: "lush",
+      visit: {
+        date: visitDate,
+        services: ["overseeding"],
+        seedMix: [{ species: "tall_fescue", percent: 100, purityPct: 98, germinationPct: 90 }],
+        seedRateLbPer1000: 5,
+        areaFt2: 5000,
+        priorPreEmergent: { product: "crabgrass_preventer", appliedOn: addDays(visitDate, 1) },
+      },
+    });
+    expect(res.status).toBe(400);
+    expect(res.body.error.fields).toMatchObject({
+      lawnCondition: "Pick the lawn's condition from the list",
+      "visit.priorPreEmergent.appliedOn": "Must be on or before the visit date",
+    });
   });
 });

@@ -3,6 +3,7 @@ import type { PlanWarning, WarningFinding, WarningSeverity } from "../types.ts";
 import { WARM_SEASON_HOMEOWNER } from "./warm-season.ts";
 import { newLawnWateringForHomeowner } from "./place-rules.ts";
 import { SEASON_HOMEOWNER } from "./season-advice.ts";
+import { preEmergentHomeownerWording } from "./pre-emergent.ts";
 
 type HomeownerWording = Pick<WarningFinding, "message" | "reason"> & { severity: WarningSeverity };
 
@@ -55,6 +56,7 @@ const HOMEOWNER: Partial<Record<string, (ctx: PlanContext, finding: WarningFindi
     const wording = newLawnWateringForHomeowner(ctx);
     return wording ? { severity: "caution", ...wording } : null;
   },
+  pre_emergent_before_seeding: preEmergentHomeownerWording,
   no_sprinkler_for_seed: (_ctx, finding) => ({
     severity: "caution",
     message: "Without a sprinkler the seed has to be kept damp by hand several times a day. A hose-end sprinkler on a timer makes that much easier.",

@@ -3,9 +3,7 @@ import type { PlanContext } from "../context.ts";
 import { formatNumber } from "../format.ts";
 import type { ProductApplied } from "../schemas/plan-input.ts";
 import { oneOffKey } from "../step-keys.ts";
-import { AUTUMN_FEEDING_N, HIGH_N_QUICK_RELEASE_RULE, SINGLE_FEEDING_N, STARTER_FEEDING } from "../tables/feeding.ts";
-import { AUTUMN_MONTHS } from "../tables/timing.ts";
-import { monthOfDayNumber } from "../dates.ts";
+import { HIGH_N_QUICK_RELEASE_RULE, SINGLE_FEEDING_N, STARTER_FEEDING } from "../tables/feeding.ts";
 import type { PlanStep } from "../types.ts";
 import type { HoldOffWindow } from "./hold-offs.ts";
 
@@ -97,30 +95,6 @@ export function feedingSteps(ctx: PlanContext, windows: readonly HoldOffWindow[]
     });
   }
 
-  const autumn = (AUTUMN_MONTHS[ctx.hemisphere] as readonly number[]).includes(monthOfDayNumber(ctx.visitDay));
-  const thick = ctx.input.property.lawnCondition === "thick" || ctx.input.property.lawnCondition === "thick_dormant";
-  if (!ctx.seeding && autumn && thick && ctx.lawnSeason === "cool") {
-    const remaining = AUTUMN_FEEDING_N.totalLbPer1000 - nitrogenAppliedPer1000(ctx);
-    const day = AUTUMN_FEEDING_N.weeksBetweenSplits * 7;
-    if (remaining >= 0.5 && day <= ctx.timeline.planEnd) {
-      const n = Math.min(SINGLE_FEEDING_N.maxLbPer1000, Math.round(remaining * 4) / 4);
-      const date = ctx.dateOf(day);
-      steps.push({
-        key: oneOffKey("feed", "autumn_split"),
-        date,
-        phase: ctx.phaseOf(day),
-        kind: "feed",
-        title: "Give the lawn its second fall feeding",
-        detail: `About ${n} lb of nitrogen per 1,000 ft² (${formatNumber((n * area) / 1000)} lb for your ${formatNumber(area, 0)} ft²). Follow the bag's rate.`,
-        feed: { product: "slow_release_n", highNQuickRelease: false, nitrogenLbPer1000: n },
-        why: {
-          text: "A thick cool-season lawn stores fall feeding in its roots; splitting it avoids a flush of soft growth.",
-          source: AUTUMN_FEEDING_N.source,
-          provenance: AUTUMN_FEEDING_N.provenance,
-        },
-        cautions: FEED_CAUTIONS,
-      });
-    }
-  }
+  // A thick lawn's fall feedings are rules/feeding-program.ts.
   return steps;
 }

@@ -83,14 +83,14 @@ describe("fertilizer blackout windows", () => {
   });
 
   it("leaves out a feeding on the plan's last day that falls in a blackout: the plan has no later day", () => {
-    // A thick cool-season lawn fed on September 10 gets its second fall feeding 6 weeks later (AUTUMN_FEEDING_N), the plan's last day.
+    // A thick cool-season lawn fed lightly on September 10 gets the fall feeding program; its last feeding, 6 weeks after the first (AUTUMN_FEEDING_N), is the plan's last day.
     const thick = withChanges({ property: { lawnCondition: "thick" } }, feedingVisit([{ name: "Lawn food 24-0-6", analysis: { n: 24, p: 0, k: 6 }, rateLbPer1000: 2 }]));
     const base = plan(thick);
-    expect(base.steps.find((s) => s.key === "feed:autumn_split")?.date).toBe("2026-10-22");
+    expect(base.steps.find((s) => s.key === "feed:fall_program_2")?.date).toBe("2026-10-22");
     expect(base.meta.planEnds).toBe("2026-10-22");
     const blocked = plan(withRules(thick, { name: "Example County", fertilizerBlackouts: [{ from: "10-20", to: "10-31" }] }));
-    expect(blocked.steps.some((s) => s.kind === "feed")).toBe(false);
-    expect(blocked.steps.find((s) => s.key === "note:no_feed_feed_autumn_split")?.date).toBe("2026-10-22");
+    expect(blocked.steps.some((s) => s.key === "feed:fall_program_2")).toBe(false);
+    expect(blocked.steps.find((s) => s.key === "note:no_feed_feed_fall_program_2")?.date).toBe("2026-10-22");
   });
 
   it("moves a feeding out of a window that runs over New Year", () => {

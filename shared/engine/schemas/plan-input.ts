@@ -1,4 +1,6 @@
 import { z } from "zod";
+import { isValidIsoDate, toDayNumber } from "../dates.ts";
+import { PRE_EMERGENT_INGREDIENTS, PRIOR_PRE_EMERGENT_PRODUCTS } from "../tables/pre-emergent.ts";
 import { SPRINKLER_TYPES } from "../tables/sprinklers.ts";
 import { isoDateSchema, localTimeSchema, speciesSchema, timeZoneSchema } from "./common.ts";
 import { placeRulesSchema } from "./place-rules.ts";
@@ -43,6 +45,17 @@ export const productAppliedSchema = z.object({
   organic: z.boolean().optional(),
 });
 
+/**
+ * A crabgrass preventer, weed-and-feed or other pre-emergent put down in the months before a
+ * seeding (by the homeowner or anyone else): it may still stop the new seed. The date may be
+ * approximate; the active ingredient is optional because few people keep the bag.
+ */
+export const priorPreEmergentSchema = z.object({
+  product: z.enum(PRIOR_PRE_EMERGENT_PRODUCTS, { message: "Pick what was put down" }),
+  appliedOn: isoDateSchema,
+  activeIngredient: z.enum(PRE_EMERGENT_INGREDIENTS, { message: "Pick an active ingredient from the list" }).optional(),
+});
+
 export const visitSchema = z
   .object({
     date: isoDateSchema,
@@ -56,6 +69,7 @@ export const visitSchema = z
     products: z.array(productAppliedSchema).max(10).default([]),
     /** A soil test showed the lawn needs phosphorus: a reason places that limit phosphorus accept. */
     soilTestCallsForPhosphorus: z.boolean().optional(),
+    priorPreEmergent: priorPreEmergentSchema.optional(),
   })
   .superRefine((visit, ctx) => {
     // Cross-field checks run even when single fields failed; guard the shapes.
@@ -64,6 +78,10 @@ export const visitSchema = z
     if (seeding && visit.seedMix.length === 0) {
       // The plan's watering and mowing dates depend on the species sown.
       ctx.addIssue({ code: "custom", path: ["seedMix"], message: "List the seed used for this seeding" });
+    }
+    const prior = visit.priorPreEmergent;
+    if (prior && isValidIsoDate(prior.appliedOn) && isValidIsoDate(visit.date) && toDayNumber(prior.appliedOn) > toDayNumber(visit.date)) {
+      ctx.addIssue({ code: "custom", path: ["priorPreEmergent", "appliedOn"], message: "Must be on or before the visit date" });
     }
     if (visit.seedMix.length === 0) return;
     const total = visit.seedMix.reduce((sum, entry) => sum + (typeof entry?.percent === "number" ? entry.percent : 0), 0);
@@ -85,6 +103,9 @@ export const visitSchema = z
 
 const round1 = (x: number) => Math.round(x * 10) / 10;
 
+export const LAWN_CONDITIONS = ["thin", "bare", "thick_dormant", "thick"] as const;
+export type LawnCondition = (typeof LAWN_CONDITIONS)[number];
+
 export const irrigationSchema = z.object({
   kind: z.enum(["in_ground", "hose_end", "none"]),
   /** Optional: without it an in-ground system uses the program's default rate, a hose-end sprinkler the hose-end range. */
@@ -99,7 +120,7 @@ export const propertySchema = z
       species: z.array(speciesSchema).max(9).default([]),
       season: z.enum(["cool", "warm"]).optional(),
     }),
-    lawnCondition: z.enum(["thin", "bare", "thick_dormant", "thick"]),
+    lawnCondition: z.enum(LAWN_CONDITIONS),
     irrigation: irrigationSchema,
     currentMowingHeightIn: z.number().min(0.5, "Must be at least 0.5 in").max(6, "Must be at most 6 in"),
     mowerHighestSettingIn: z.number().min(1, "Must be at least 1 in").max(6, "Must be at most 6 in"),
@@ -154,6 +175,7 @@ export const planInputSchema = z.object({
 
 export type SeedMixEntry = z.output<typeof seedMixEntrySchema>;
 export type ProductApplied = z.output<typeof productAppliedSchema>;
+export type PriorPreEmergent = z.output<typeof priorPreEmergentSchema>;
 export type Visit = z.output<typeof visitSchema>;
 export type Irrigation = z.output<typeof irrigationSchema>;
 export type Property = z.output<typeof propertySchema>;

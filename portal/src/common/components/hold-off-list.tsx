@@ -4,7 +4,7 @@ import { cautionTexts } from "../lib/caution-texts.ts";
 import { formatShortDate } from "../lib/dates.ts";
 import { WhyDetails } from "./why-details.tsx";
 
-const knownKinds = new Set(["weed_and_feed", "broadleaf_herbicide", "crabgrass_pre_emergent", "high_n_quick_release", "heavy_traffic"]);
+const knownKinds = new Set(["weed_and_feed", "broadleaf_herbicide", "crabgrass_pre_emergent", "high_n_quick_release", "heavy_traffic", "new_seed"]);
 
 export interface HoldOffListProps {
   holdOffs: readonly StoredHoldOff[];

@@ -1,16 +1,19 @@
 import { useEffect, useState } from "react";
 import { FormProvider, useForm } from "react-hook-form";
 import { useQueryClient } from "@tanstack/react-query";
+import { LAWN_CONDITIONS, type LawnCondition } from "#shared/engine/index";
 import { Button, Notice, Page, TextAreaField, isApiRequestError, useSignedInUser } from "#shared/ui/index";
 import { propertyQueryOptions } from "./api/get-property.ts";
 import { useLogVisit } from "./api/log-visit.ts";
 import { ConditionsFields } from "./components/conditions-fields.tsx";
 import { ErrorSummary } from "./components/error-summary.tsx";
 import { FormSection } from "./components/form-section.tsx";
+import { PriorPreEmergentFields } from "./components/prior-pre-emergent-fields.tsx";
 import { ProductFields } from "./components/product-fields.tsx";
 import { PropertyPicker } from "./components/property-picker.tsx";
 import { RegulatedApplicationFields } from "./components/regulated-application-fields.tsx";
 import { SeedFields } from "./components/seed-fields.tsx";
+import { LawnToday } from "./components/lawn-today.tsx";
 import { VisitBasics } from "./components/visit-basics.tsx";
 import { VisitSaved, type SavedVisit } from "./components/visit-saved.tsx";
 import { VisitWarnings } from "./components/visit-warnings.tsx";
@@ -60,6 +63,9 @@ export function VisitLogRoute() {
       .fetchQuery(propertyQueryOptions(next.propertyId))
       .then((property) => {
         if (!form.getValues("visit.areaFt2") && property.lawnAreaFt2) form.setValue("visit.areaFt2", String(property.lawnAreaFt2), { shouldDirty: true });
+        // Likewise the lawn's recorded condition, for the technician to confirm or correct.
+        const recorded = property.lawn.lawnCondition;
+        if (!form.getValues("lawnCondition") && isLawnCondition(recorded)) form.setValue("lawnCondition", recorded, { shouldDirty: true });
       })
       .catch(() => undefined);
   };
@@ -117,7 +123,9 @@ export function VisitLogRoute() {
               <PropertyPicker chosen={lawn} onChoose={chooseLawn} error={errors.propertyId} />
             </FormSection>
             <VisitBasics />
+            <LawnToday />
             <SeedFields />
+            <PriorPreEmergentFields />
             <ProductFields />
             <VisitWarnings propertyId={lawn?.propertyId ?? null} />
             <ConditionsFields />
@@ -148,3 +156,5 @@ function focusFirst(paths: string[]) {
   target?.scrollIntoView({ block: "center" });
   target?.focus({ preventScroll: true });
 }
+
+const isLawnCondition = (value: unknown): value is LawnCondition => (LAWN_CONDITIONS as readonly unknown[]).includes(value);

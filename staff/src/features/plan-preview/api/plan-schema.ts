@@ -8,7 +8,7 @@ import { CAUTION_IDS, SPECIES, type Plan } from "#shared/engine/index";
 const isoDate = z.string();
 const provenance = z.enum(["published", "common practice", "from memory"]);
 const phase = z.enum(["prep", "germination", "establishment", "maturing"]);
-const holdOffKind = z.enum(["weed_and_feed", "broadleaf_herbicide", "crabgrass_pre_emergent", "high_n_quick_release", "heavy_traffic"]);
+const holdOffKind = z.enum(["weed_and_feed", "broadleaf_herbicide", "crabgrass_pre_emergent", "high_n_quick_release", "heavy_traffic", "new_seed"]);
 const cautionId = z.enum(CAUTION_IDS);
 const nutrients = z.object({ n: z.number(), p: z.number(), k: z.number() });
 

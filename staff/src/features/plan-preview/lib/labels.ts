@@ -46,6 +46,7 @@ export const HOLD_OFF_LABELS: Record<HoldOffKind, string> = {
   crabgrass_pre_emergent: "No crabgrass pre-emergent",
   high_n_quick_release: "No high-nitrogen quick-release feed",
   heavy_traffic: "Keep heavy traffic off",
+  new_seed: "No more seed while an earlier pre-emergent is active",
 };
 
 export const PROVENANCE_LABELS: Record<Provenance, string> = {

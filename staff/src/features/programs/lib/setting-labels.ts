@@ -65,4 +65,5 @@ export const holdOffLabels: Record<string, string> = {
   crabgrass_pre_emergent: "No crabgrass pre-emergent",
   high_n_quick_release: "No quick-release high-N feed",
   heavy_traffic: "Keep heavy traffic off",
+  new_seed: "No more seed while an earlier pre-emergent is active",
 };

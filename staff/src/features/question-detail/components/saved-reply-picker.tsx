@@ -1,4 +1,5 @@
 import { useId, useState } from "react";
+import { SPECIES_FACTS, type Species } from "#shared/engine/index";
 import { Button, FieldError, Notice, SelectField, errorMessage } from "#shared/ui/index";
 import { useRenderSavedReply } from "../api/render-saved-reply.ts";
 import { useSavedReplies } from "../api/get-saved-replies.ts";
@@ -19,6 +20,7 @@ export function SavedReplyPicker({ planId, onInsert }: { planId: number; onInser
   const render = useRenderSavedReply(planId);
   const [replyId, setReplyId] = useState("");
   const [missing, setMissing] = useState<string[]>([]);
+  const [otherGrasses, setOtherGrasses] = useState<Species[]>([]);
   const statusId = useId();
 
   if (replies.isPending) return <p className="text-ink-soft">Loading saved replies…</p>;
@@ -28,8 +30,9 @@ export function SavedReplyPicker({ planId, onInsert }: { planId: number; onInser
   const use = () => {
     if (!replyId) return;
     render.mutate(Number(replyId), {
-      onSuccess: ({ text, missing }) => {
+      onSuccess: ({ text, missing, speciesNotInLawn }) => {
         setMissing(missing);
+        setOtherGrasses(speciesNotInLawn);
         onInsert(text);
       },
     });
@@ -52,6 +55,13 @@ export function SavedReplyPicker({ planId, onInsert }: { planId: number; onInser
       </div>
       <div id={statusId} aria-live="polite">
         {render.isError && <FieldError message={errorMessage(render.error)} />}
+        {render.isSuccess && otherGrasses.length > 0 && (
+          <Notice tone="warning" title="Check the grass named">
+            <span data-testid="saved-reply-other-grasses">
+              This reply mentions {listWords(otherGrasses.map((s) => SPECIES_FACTS[s].name))}, not in this lawn or its seed mix. Change it before sending.
+            </span>
+          </Notice>
+        )}
         {render.isSuccess && missing.length > 0 && (
           <Notice tone="warning">
             This plan has no {missing.map((m) => placeholderWords[m] ?? m).join(" or ")} yet, so the reply says it in general words. Read it before sending.
@@ -60,4 +70,9 @@ export function SavedReplyPicker({ planId, onInsert }: { planId: number; onInser
       </div>
     </div>
   );
+}
+
+/** "a", "a and b", "a, b and c". */
+function listWords(words: readonly string[]): string {
+  return words.length <= 1 ? (words[0] ?? "") : `${words.slice(0, -1).join(", ")} and ${words[words.length - 1]}`;
 }

@@ -60,6 +60,7 @@ function ProductRowFields({ index, onRemove }: { index: number; onRemove: () => 
         <VisitTextField path={`visit.products.${index}.bagLb`} label="Bag size (lb)" numeric />
       </div>
       <CheckboxField label="Most of its nitrogen is quick-release" className="font-normal" {...register(`visit.products.${index}.quickReleaseN`)} />
+      <CheckboxField label="Organic (natural) fertilizer" className="font-normal" {...register(`visit.products.${index}.organic`)} />
       <p aria-live="polite" className="rounded-lg bg-pine-50 p-3" data-testid="product-figures">
         {figures ? (
           <>

@@ -1,5 +1,5 @@
 import type { ChosenLawn } from "./chosen-lawn.ts";
-import { emptyApplication, type VisitFormValues } from "./form-values.ts";
+import { emptyApplication, emptyPriorPreEmergent, type VisitFormValues } from "./form-values.ts";
 
 /*
  * A visit half-logged on a phone survives a closed tab, a lock screen or a dead signal:
@@ -21,6 +21,7 @@ export function loadDraft(): VisitDraft | null {
     if (!draft || typeof draft !== "object" || !draft.values?.visit) return null;
     // A draft kept by an older version of the form may lack fields added since.
     draft.values.application = { ...emptyApplication(), ...draft.values.application };
+    draft.values.visit.priorPreEmergent = { ...emptyPriorPreEmergent(), ...draft.values.visit.priorPreEmergent };
     return draft;
   } catch {
     return null;

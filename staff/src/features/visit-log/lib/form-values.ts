@@ -1,4 +1,4 @@
-import type { Service, Species } from "#shared/engine/index";
+import type { LawnCondition, PreEmergentIngredient, PriorPreEmergentProduct, Service, Species } from "#shared/engine/index";
 import { localToday } from "#shared/ui/index";
 import { WIND_DIRECTIONS } from "#shared/schemas/visits";
 
@@ -21,11 +21,24 @@ export interface ProductRow {
   analysis: { n: string; p: string; k: string };
   rateLbPer1000: string;
   quickReleaseN: boolean;
+  /** Organic (natural) fertilizer: suits new seed as a starter does. Absent in drafts kept before it was asked. */
+  organic?: boolean;
   /** Only for the live bag count; not part of the visit. */
   bagLb: string;
 }
 
 export { WIND_DIRECTIONS };
+
+/**
+ * Asked on seeding visits: was a weed preventer put down in the months before? "answer" is the
+ * form's own ("" = not answered yet); the rest is sent as visit.priorPreEmergent when it is "yes".
+ */
+export interface PriorPreEmergentAnswer {
+  answer: "" | "no" | "yes" | "unknown";
+  product: PriorPreEmergentProduct | "";
+  appliedOn: string;
+  activeIngredient: PreEmergentIngredient | "";
+}
 
 export interface ApplicationRecord {
   product: string;
@@ -43,6 +56,8 @@ export interface ApplicationRecord {
 
 export interface VisitFormValues {
   propertyId: string;
+  /** The lawn as found today ("" until the lawn's recorded condition is filled in); absent in older drafts. */
+  lawnCondition?: LawnCondition | "";
   visit: {
     date: string;
     services: Service[];
@@ -52,6 +67,8 @@ export interface VisitFormValues {
     products: ProductRow[];
     /** A soil test shows the lawn needs phosphorus: places that limit phosphorus accept it as a reason. */
     soilTestCallsForPhosphorus?: boolean;
+    /** Absent in drafts kept before the form asked it. */
+    priorPreEmergent?: PriorPreEmergentAnswer;
   };
   seedBagLb: string;
   conditions: { temperatureF: string; windMph: string; windDirection: string };
@@ -61,7 +78,8 @@ export interface VisitFormValues {
 }
 
 export const emptySeedRow = (): SeedRow => ({ species: "", percent: "", purityPct: "", germinationPct: "" });
-export const emptyProductRow = (): ProductRow => ({ name: "", analysis: { n: "", p: "", k: "" }, rateLbPer1000: "", quickReleaseN: false, bagLb: "50" });
+export const emptyProductRow = (): ProductRow => ({ name: "", analysis: { n: "", p: "", k: "" }, rateLbPer1000: "", quickReleaseN: false, organic: false, bagLb: "50" });
+export const emptyPriorPreEmergent = (): PriorPreEmergentAnswer => ({ answer: "", product: "", appliedOn: "", activeIngredient: "" });
 export const emptyApplication = (): ApplicationRecord => ({
   product: "",
   epaRegistrationNo: "",
@@ -77,7 +95,8 @@ export const emptyApplication = (): ApplicationRecord => ({
 export function defaultVisitForm(applicatorName = ""): VisitFormValues {
   return {
     propertyId: "",
-    visit: { date: localToday(), services: [], seedMix: [], seedRateLbPer1000: "", areaFt2: "", products: [] },
+    lawnCondition: "",
+    visit: { date: localToday(), services: [], seedMix: [], seedRateLbPer1000: "", areaFt2: "", products: [], priorPreEmergent: emptyPriorPreEmergent() },
     seedBagLb: "50",
     conditions: { temperatureF: "", windMph: "", windDirection: "" },
     notes: "",

@@ -3,6 +3,7 @@ import { logVisitSchema, type LogVisit } from "#shared/schemas/visits";
 import { compact, toFormFields, type ApplicationRecordBody, type VisitConditionsBody } from "./application-record.ts";
 import type { VisitFormValues } from "./form-values.ts";
 import { parseNumber } from "./numbers.ts";
+import { priorPreEmergentBody } from "./prior-pre-emergent.ts";
 
 export type FormFieldErrors = Record<string, string>;
 export type CheckedVisit = { ok: true; body: LogVisit } | { ok: false; fields: FormFieldErrors };
@@ -58,7 +59,11 @@ export function checkVisitForm(values: VisitFormValues): CheckedVisit {
     },
     rateLbPer1000: number(`visit.products.${i}.rateLbPer1000`, row.rateLbPer1000, true),
     quickReleaseN: row.quickReleaseN,
+    organic: row.organic || undefined,
   }));
+  const priorPreEmergent = priorPreEmergentBody(v, (path, message) => {
+    fields[path] = message;
+  });
   const regulated = values.regulated;
   const c = values.conditions;
   const calm = c.windDirection === "calm";
@@ -99,6 +104,7 @@ export function checkVisitForm(values: VisitFormValues): CheckedVisit {
 
   const raw = {
     propertyId: Number(values.propertyId) || undefined,
+    lawnCondition: values.lawnCondition || undefined,
     visit: {
       date: v.date,
       services: v.services,
@@ -107,6 +113,7 @@ export function checkVisitForm(values: VisitFormValues): CheckedVisit {
       areaFt2: number("visit.areaFt2", v.areaFt2, true),
       products,
       ...(v.soilTestCallsForPhosphorus ? { soilTestCallsForPhosphorus: true } : {}),
+      priorPreEmergent,
     },
     conditions,
     applicationRecord,

@@ -2,6 +2,7 @@ import { parsePlanInput, visitWarnings, type PlanWarning } from "#shared/engine/
 import type { PropertyDetail } from "#shared/schemas/properties";
 import type { VisitFormValues } from "./form-values.ts";
 import { parseNumber } from "./numbers.ts";
+import { priorPreEmergentBody } from "./prior-pre-emergent.ts";
 
 export type VisitWarningsState =
   | { state: "no_lawn" }
@@ -45,10 +46,13 @@ export function warningsForVisit(values: VisitFormValues, property: PropertyDeta
           analysis: { n: figure(row.analysis.n), p: figure(row.analysis.p), k: figure(row.analysis.k) },
           rateLbPer1000: figure(row.rateLbPer1000),
           quickReleaseN: row.quickReleaseN,
+          organic: row.organic || undefined,
         })),
         ...(v.soilTestCallsForPhosphorus ? { soilTestCallsForPhosphorus: true } : {}),
+        priorPreEmergent: priorPreEmergentBody(v),
       },
-      property: { ...property.lawn, timeZone: property.timeZone },
+      // The condition picked on the form is what the saved visit records, so the plan reads it.
+      property: { ...property.lawn, ...(values.lawnCondition ? { lawnCondition: values.lawnCondition } : {}), timeZone: property.timeZone },
     };
   } catch (error) {
     if (error instanceof Incomplete) return { state: "incomplete" };

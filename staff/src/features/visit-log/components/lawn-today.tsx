@@ -1,0 +1,62 @@
+import { useFormContext, useWatch } from "react-hook-form";
+import { LAWN_CONDITIONS, SEEDING_SERVICES, type LawnCondition } from "#shared/engine/index";
+import { Button, Notice, SelectField } from "#shared/ui/index";
+import { useFieldError } from "../lib/field-errors.ts";
+import { fieldId, type VisitFormValues } from "../lib/form-values.ts";
+import { isSeedingVisit } from "../lib/prior-pre-emergent.ts";
+import { FormSection } from "./form-section.tsx";
+
+const CONDITION_LABELS: Record<LawnCondition, string> = {
+  thin: "Thin or patchy",
+  bare: "Bare soil (new lawn)",
+  thick: "Thick",
+  thick_dormant: "Thick but brown (dormant after summer)",
+};
+
+/**
+ * The lawn as the crew finds it today: saved as the lawn's condition, and the plan follows it.
+ * A thick lawn doesn't need seed, so the fall feeding program is offered instead, and a seeding
+ * can be turned into a feeding in one tap.
+ */
+export function LawnToday() {
+  const { control, register, setValue, getValues } = useFormContext<VisitFormValues>();
+  const [visit, condition] = useWatch({ control, name: ["visit", "lawnCondition"] });
+  const error = useFieldError("lawnCondition");
+  const seeding = isSeedingVisit(visit);
+
+  const switchToFeeding = () => {
+    const services = getValues("visit.services").filter((s) => !SEEDING_SERVICES.includes(s));
+    setValue("visit.services", services.includes("fertiliser_only") ? services : [...services, "fertiliser_only"], { shouldDirty: true });
+    setValue("visit.seedMix", [], { shouldDirty: true });
+    setValue("visit.seedRateLbPer1000", "", { shouldDirty: true });
+  };
+
+  return (
+    <FormSection legend="The lawn today">
+      <SelectField
+        id={fieldId("lawnCondition")}
+        label="Lawn condition"
+        hint="Filled in from the lawn's record; change it if the lawn looks different today."
+        placeholderOption="As recorded"
+        error={error}
+        options={LAWN_CONDITIONS.map((c) => ({ value: c, label: CONDITION_LABELS[c] }))}
+        {...register("lawnCondition")}
+      />
+      {condition === "thick" && (
+        <Notice title="A thick lawn doesn't need seed" tone={seeding ? "warning" : "info"}>
+          <div data-testid="thick-lawn-notice" className="flex flex-col gap-2">
+            <p>
+              In the fall its plan lays out the feeding program instead: about 2 lb of nitrogen per 1,000 ft² over the fall, in feedings of ¾–1 lb,
+              4–6 weeks apart. A feeding you put down today counts as the first: log it under Products.
+            </p>
+            {seeding && (
+              <Button variant="secondary" className="self-start" onClick={switchToFeeding}>
+                Log a fall feeding instead of seed
+              </Button>
+            )}
+          </div>
+        </Notice>
+      )}
+    </FormSection>
+  );
+}
