@@ -8,6 +8,7 @@ import { leafCleanupSteps, thatchCleanupSteps } from "./rules/seasonal.ts";
 import { nitrogenWarnings } from "./rules/nitrogen-warnings.ts";
 import { warningsForAudiences } from "./rules/audiences.ts";
 import { planWarnings } from "./rules/warnings.ts";
+import { applySituations, situationHoldOffs, situationSteps, situationWarnings } from "./rules/situations.ts";
 import { wateringSteps } from "./rules/watering.ts";
 import { hashInput } from "./hash.ts";
 import type { PlanInput } from "./schemas/plan-input.ts";
@@ -62,7 +63,7 @@ function cautionsUsed(groups: readonly (readonly { cautions: readonly CautionId[
  */
 export function visitWarnings(input: PlanInput): PlanWarning[] {
   const ctx = buildContext(input);
-  return warningsForAudiences(ctx, planWarnings(ctx));
+  return warningsForAudiences(ctx, [...planWarnings(ctx), ...situationWarnings(ctx)]);
 }
 
 /**
@@ -73,12 +74,12 @@ export function visitWarnings(input: PlanInput): PlanWarning[] {
 export function generatePlan(input: PlanInput): Plan {
   const ctx = buildContext(input);
   const windows = holdOffWindows(ctx);
-  const holdOffs: HoldOff[] = holdOffsFor(ctx, windows);
+  const holdOffs: HoldOff[] = [...holdOffsFor(ctx, windows), ...situationHoldOffs(ctx)];
   const prep = sortSteps(fromToday(ctx, applySkips(ctx, prepSteps(ctx))));
   const steps = sortSteps(
     fromToday(
       ctx,
-      applySkips(ctx, [
+      applySkips(ctx, applySituations(ctx, [
         ...thatchCleanupSteps(ctx),
         ...aerationCoreSteps(ctx),
         ...wateringSteps(ctx),
@@ -87,7 +88,8 @@ export function generatePlan(input: PlanInput): Plan {
         ...holdOffEndSteps(ctx, windows),
         ...leafCleanupSteps(ctx),
         ...checkInSteps(ctx),
-      ]),
+        ...situationSteps(ctx),
+      ])),
     ),
   );
   const { timeline } = ctx;
@@ -108,7 +110,7 @@ export function generatePlan(input: PlanInput): Plan {
     prepSteps: prep,
     steps,
     holdOffs,
-    warnings: warningsForAudiences(ctx, [...planWarnings(ctx), ...nitrogenWarnings(ctx)]),
+    warnings: warningsForAudiences(ctx, [...planWarnings(ctx), ...nitrogenWarnings(ctx), ...situationWarnings(ctx)]),
     summary: calculatorSummary(ctx),
     cautions: cautionsUsed([prep, steps, holdOffs]),
   };

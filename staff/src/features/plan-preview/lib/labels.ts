@@ -11,6 +11,7 @@ export const SERVICE_LABELS: Record<Service, string> = {
   starter_fertiliser: "Starter fertiliser",
   fertiliser_only: "Fertiliser only",
   top_dressing: "Top dressing",
+  sod_installation: "Sod installation",
 };
 
 export const LAWN_CONDITION_LABELS: Record<LawnCondition, string> = {
