@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { isoDateSchema, visitSchema } from "../engine/index.ts";
+import { isoDateSchema, SHADE_LEVELS, SLOPES, visitSchema } from "../engine/index.ts";
 
 export const WIND_DIRECTIONS = ["calm", "N", "NE", "E", "SE", "S", "SW", "W", "NW", "variable"] as const;
 
@@ -63,10 +63,21 @@ export const applicationRecordSchema = z
   });
 export type ApplicationRecord = z.infer<typeof applicationRecordSchema>;
 
+/**
+ * Lawn facts the technician sees on site (slope, shade). Sent only when noted; they are saved on
+ * the lawn, so this visit's plan and later ones use them. Absent means "as recorded".
+ */
+export const lawnOnSiteSchema = z.object({
+  slope: z.enum(SLOPES, { error: "Pick the slope from the list" }).optional(),
+  shade: z.enum(SHADE_LEVELS, { error: "Pick the shade from the list" }).optional(),
+});
+export type LawnOnSite = z.infer<typeof lawnOnSiteSchema>;
+
 /** Logging a visit: the engine's visit fields plus which lawn, the conditions, a regulated-application record and notes. */
 export const logVisitSchema = z.object({
   propertyId: z.number().int().positive(),
   visit: visitSchema,
+  lawn: lawnOnSiteSchema.optional(),
   conditions: visitConditionsSchema.optional(),
   applicationRecord: applicationRecordSchema.optional(),
   notes: z.string().trim().max(4000).optional(),

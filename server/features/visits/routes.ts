@@ -3,7 +3,7 @@ import { logVisitSchema, moveVisitSchema } from "#shared/schemas/visits";
 import type { AppDeps } from "../../app.ts";
 import { notFound } from "../../http/errors.ts";
 import { route, type RouteSpec } from "../../http/route.ts";
-import { findInCompany } from "../properties/repo.ts";
+import { findInCompany, mergeLawnFacts } from "../properties/repo.ts";
 import { createPlanForVisit, regeneratePlan, type PlanChangeHook } from "../plans/service.ts";
 import { planIdOfVisit } from "../plans/plans-repo.ts";
 import { insertVisit, loadVisitWithProperty, moveVisit } from "./repo.ts";
@@ -25,6 +25,8 @@ export function visitRoutes(deps: AppDeps, onChange?: PlanChangeHook): RouteSpec
         const { date, services, ...details } = body.visit;
         // The visit and its whole plan land together or not at all.
         const created = await db.transaction(async (trx) => {
+          // Slope and shade seen today belong to the lawn; saved first so this visit's plan uses them.
+          if (body.lawn) await mergeLawnFacts(trx, property.id, body.lawn);
           const visitId = await insertVisit(trx, {
             propertyId: property.id,
             technicianId: user.role === "technician" ? user.id : null,

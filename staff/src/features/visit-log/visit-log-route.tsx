@@ -7,6 +7,7 @@ import { useLogVisit } from "./api/log-visit.ts";
 import { ConditionsFields } from "./components/conditions-fields.tsx";
 import { ErrorSummary } from "./components/error-summary.tsx";
 import { FormSection } from "./components/form-section.tsx";
+import { LawnOnSiteFields } from "./components/lawn-on-site-fields.tsx";
 import { ProductFields } from "./components/product-fields.tsx";
 import { PropertyPicker } from "./components/property-picker.tsx";
 import { RegulatedApplicationFields } from "./components/regulated-application-fields.tsx";
@@ -117,6 +118,7 @@ export function VisitLogRoute() {
               <PropertyPicker chosen={lawn} onChoose={chooseLawn} error={errors.propertyId} />
             </FormSection>
             <VisitBasics />
+            <LawnOnSiteFields propertyId={lawn?.propertyId ?? null} />
             <SeedFields />
             <ProductFields />
             <VisitWarnings propertyId={lawn?.propertyId ?? null} />

@@ -7,6 +7,8 @@ const LABELS: Record<string, string> = {
   "visit.seedRateLbPer1000": "Seed rate",
   "visit.products": "Products",
   seedBagLb: "Seed bag size",
+  "lawn.slope": "Slope",
+  "lawn.shade": "Shade",
   "conditions.temperatureF": "Temperature",
   "conditions.windMph": "Wind speed",
   "conditions.windDirection": "Wind direction",

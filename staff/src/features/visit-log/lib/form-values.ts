@@ -1,6 +1,7 @@
 import type { Service, Species } from "#shared/engine/index";
 import { localToday } from "#shared/ui/index";
 import { WIND_DIRECTIONS } from "#shared/schemas/visits";
+import { emptyLawnOnSite, type LawnOnSiteValues } from "./lawn-on-site.ts";
 
 /*
  * The form keeps what was typed, as text; it is turned into the API's numbers on save
@@ -52,6 +53,8 @@ export interface VisitFormValues {
     products: ProductRow[];
   };
   seedBagLb: string;
+  /** Slope and shade seen today (components/lawn-on-site-fields.tsx). */
+  lawn: LawnOnSiteValues;
   conditions: { temperatureF: string; windMph: string; windDirection: string };
   notes: string;
   regulated: boolean;
@@ -77,6 +80,7 @@ export function defaultVisitForm(applicatorName = ""): VisitFormValues {
     propertyId: "",
     visit: { date: localToday(), services: [], seedMix: [], seedRateLbPer1000: "", areaFt2: "", products: [] },
     seedBagLb: "50",
+    lawn: emptyLawnOnSite(),
     conditions: { temperatureF: "", windMph: "", windDirection: "" },
     notes: "",
     regulated: false,

@@ -2,6 +2,7 @@ import { SEED_MIX_SUM_TOLERANCE } from "#shared/engine/index";
 import { logVisitSchema, type LogVisit } from "#shared/schemas/visits";
 import { compact, toFormFields, type ApplicationRecordBody, type VisitConditionsBody } from "./application-record.ts";
 import type { VisitFormValues } from "./form-values.ts";
+import { toLawnOnSite } from "./lawn-on-site.ts";
 import { parseNumber } from "./numbers.ts";
 
 export type FormFieldErrors = Record<string, string>;
@@ -107,6 +108,7 @@ export function checkVisitForm(values: VisitFormValues): CheckedVisit {
       areaFt2: number("visit.areaFt2", v.areaFt2, true),
       products,
     },
+    lawn: toLawnOnSite(values.lawn),
     conditions,
     applicationRecord,
     notes,
