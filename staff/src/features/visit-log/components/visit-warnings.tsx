@@ -11,11 +11,12 @@ const box = "flex min-w-0 flex-col gap-3 rounded-xl border border-line bg-surfac
 export function VisitWarnings({ propertyId }: { propertyId: number | null }) {
   const { control } = useFormContext<VisitFormValues>();
   const visit = useWatch({ control, name: "visit" });
+  const lawnToday = useWatch({ control, name: "lawn" });
   const property = useProperty(propertyId);
-  const visitJson = JSON.stringify(visit);
+  const visitJson = JSON.stringify({ visit, lawn: lawnToday });
   // Recomputed only when a figure or the lawn changes, not on every render of the form.
   const result = useMemo(
-    () => warningsForVisit({ visit: JSON.parse(visitJson) } as VisitFormValues, property.data),
+    () => warningsForVisit(JSON.parse(visitJson) as VisitFormValues, property.data),
     [visitJson, property.data],
   );
 

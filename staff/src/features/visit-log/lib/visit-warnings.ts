@@ -1,6 +1,7 @@
 import { parsePlanInput, visitWarnings, type PlanWarning } from "#shared/engine/index";
 import type { PropertyDetail } from "#shared/schemas/properties";
 import type { VisitFormValues } from "./form-values.ts";
+import { toLawnOnSite } from "./lawn-on-site.ts";
 import { parseNumber } from "./numbers.ts";
 
 export type VisitWarningsState =
@@ -47,7 +48,8 @@ export function warningsForVisit(values: VisitFormValues, property: PropertyDeta
           quickReleaseN: row.quickReleaseN,
         })),
       },
-      property: { ...property.lawn, timeZone: property.timeZone },
+      // Slope and shade noted today win over the record, as they will once saved.
+      property: { ...property.lawn, ...toLawnOnSite(values.lawn), timeZone: property.timeZone },
     };
   } catch (error) {
     if (error instanceof Incomplete) return { state: "incomplete" };
