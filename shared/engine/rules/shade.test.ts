@@ -51,8 +51,21 @@ describe("shade", () => {
     expect(followUp("partial")?.feed?.nitrogenLbPer1000).toBe(0.55);
   });
 
+  it("names the shade-tolerant grasses of the mix's own season: a bermudagrass mix is pointed to St. Augustine, zoysia and centipede, not fine fescue", () => {
+    const plan = generatePlan(valid(withChanges({
+      visit: { services: ["new_seeding"], seedMix: mix([["bermudagrass", 100]]), seedRateLbPer1000: 1.5 },
+      property: { shade: "partial", grassType: { species: ["bermudagrass"] }, lawnCondition: "bare" },
+    })));
+    expect(plan.warnings.find((w) => w.code === "shade_mix_low_tolerance")?.message).toBe(
+      "Partial shade, but only 0 % of the mix is shade-tolerant grass (zoysiagrass, St. Augustinegrass, centipedegrass).",
+    );
+  });
+
   it("gives a shaded lawn's homeowner a care note, and a sunny lawn none", () => {
     expect(generatePlan(valid(withChanges({ property: { shade: "partial" } }))).steps.find((s) => s.key === "note:shade_care")?.detail).toMatch(/Rake or blow fallen leaves/);
     expect(generatePlan(valid(withChanges({}))).steps.some((s) => s.key === "note:shade_care")).toBe(false);
+    // A plan made two days after the visit starts that day, and the note with it.
+    const later = generatePlan(valid(withChanges({ property: { shade: "heavy" }, options: { today: "2026-09-12" } })));
+    expect(later.steps.find((s) => s.key === "note:shade_care")?.date).toBe("2026-09-12");
   });
 });

@@ -2,14 +2,16 @@ import type { PlanContext } from "../context.ts";
 import { formatNumber } from "../format.ts";
 import type { SeedMixEntry, ShadeLevel } from "../schemas/plan-input.ts";
 import { oneOffKey } from "../step-keys.ts";
+import { firstPlanDay } from "./plan-start.ts";
 import type { Provenance } from "../tables/provenance.ts";
 import { SHADE_MIX_RULE, SHADE_NITROGEN, SHADE_TOLERANCE, type ShadeTolerance } from "../tables/shade.ts";
 import { SPECIES, SPECIES_FACTS } from "../tables/species.ts";
 import type { PlanStep, WarningFinding } from "../types.ts";
 
 const TEXT = {
-  mixMessage: (shade: Exclude<ShadeLevel, "none">, percent: string, kinds: string) =>
-    `${shade === "heavy" ? "Heavy" : "Partial"} shade, but only ${percent} % of the mix is ${kinds}. Shade mixes are mostly fine fescues${shade === "partial" ? " (tall fescue copes with partial shade)" : ""}.`,
+  mixMessage: (shade: Exclude<ShadeLevel, "none">, percent: string, names: string, coolSeason: boolean) =>
+    `${shade === "heavy" ? "Heavy" : "Partial"} shade, but only ${percent} % of the mix is shade-tolerant grass (${names}).` +
+    (coolSeason ? ` Shade mixes are mostly fine fescues${shade === "partial" ? " (tall fescue copes with partial shade)" : ""}.` : ""),
   mixReason: "Sun-loving grasses sown in shade come up, then thin out within a season or two.",
   nitrogen: (n: string, total: string, area: string) =>
     ` Your lawn is shaded, so use less: about ${n} lb of nitrogen per 1,000 ft² (${total} lb for your ${area} ft²).`,
@@ -55,7 +57,7 @@ export function shadeWarnings(ctx: PlanContext): WarningFinding[] {
     {
       code: "shade_mix_low_tolerance",
       severity: shade === "heavy" && percent === 0 ? "risk" : "caution",
-      message: TEXT.mixMessage(shade, formatNumber(percent, 0), `shade-tolerant grass (${tolerantNames.join(", ")})`),
+      message: TEXT.mixMessage(shade, formatNumber(percent, 0), tolerantNames.join(", "), !seasons.has("warm")),
       reason: TEXT.mixReason,
       source: `${SHADE_MIX_RULE.source}; shade tolerance: ${SHADE_TOLERANCE.fine_fescue.source}`,
       provenance: ratingsProvenance,
@@ -93,11 +95,13 @@ export function applyShadeNitrogen(ctx: PlanContext, steps: readonly PlanStep[])
 /** A plain note for the homeowner of a shaded lawn. */
 export function shadeSteps(ctx: PlanContext): PlanStep[] {
   if (shadeOf(ctx) === "none") return [];
+  const day = firstPlanDay(ctx);
+  if (day > ctx.timeline.planEnd) return [];
   return [
     {
       key: oneOffKey("note", "shade_care"),
-      date: ctx.dateOf(0),
-      phase: ctx.phaseOf(0),
+      date: ctx.dateOf(day),
+      phase: ctx.phaseOf(day),
       kind: "note",
       title: TEXT.careTitle,
       detail: TEXT.careDetail,

@@ -5,6 +5,7 @@ import type { Slope } from "../schemas/plan-input.ts";
 import type { Why } from "../tables/provenance.ts";
 import { CYCLE_AND_SOAK, EROSION_CONTROL } from "../tables/slopes.ts";
 import type { CycleAndSoak, PlanStep, WarningFinding } from "../types.ts";
+import { firstPlanDay } from "./plan-start.ts";
 
 const cycleSoakWhy =
   " On a slope, water that falls faster than the soil takes it in runs downhill, taking seed and soil with it; short runs with pauses let each one soak in.";
@@ -139,11 +140,12 @@ export function slopeWarnings(ctx: PlanContext): WarningFinding[] {
 export function slopeSteps(ctx: PlanContext): PlanStep[] {
   if (slopeOf(ctx) === "none" || !ctx.seeding) return [];
   const steps: PlanStep[] = [];
-  if (ctx.timeline.planEnd >= 1) {
+  const watchDay = Math.max(1, firstPlanDay(ctx));
+  if (watchDay <= ctx.timeline.planEnd) {
     steps.push({
       key: oneOffKey("note", "slope_washout_watch"),
-      date: ctx.dateOf(1),
-      phase: ctx.phaseOf(1),
+      date: ctx.dateOf(watchDay),
+      phase: ctx.phaseOf(watchDay),
       kind: "note",
       title: TEXT.watchTitle,
       detail: TEXT.watchDetail,
