@@ -2,7 +2,7 @@ import type { PlanContext } from "../context.ts";
 import type { HoldOff, PlanStep, WarningFinding } from "../types.ts";
 import { shadeSteps, shadeWarnings, applyShadeNitrogen } from "./shade.ts";
 import { applyCycleAndSoak, slopeSteps, slopeWarnings } from "./slopes.ts";
-import { applySod, isSodInstallation, sodHoldOffs } from "./sod.ts";
+import { applySod, isSodInstallation, sodHoldOffs, sodWarnings } from "./sod.ts";
 
 /*
  * Sod, slopes and shade, chained into generate.ts in one place. Each is a post-pass over
@@ -25,5 +25,5 @@ export function situationHoldOffs(ctx: PlanContext): HoldOff[] {
 }
 
 export function situationWarnings(ctx: PlanContext): WarningFinding[] {
-  return [...slopeWarnings(ctx), ...shadeWarnings(ctx)];
+  return [...sodWarnings(ctx), ...slopeWarnings(ctx), ...shadeWarnings(ctx)];
 }

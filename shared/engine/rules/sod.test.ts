@@ -73,6 +73,13 @@ describe("sod installation", () => {
     expect(mows.map((m) => m.heightIn)).toEqual([4, 3.5, 3, 3, 3, 3].slice(0, mows.length));
   });
 
+  it("warns the crew when the lawn has no sprinkler: 0.5 in a day for 9 days by hose", () => {
+    const plan = sodPlan({ property: { irrigation: { kind: "none" } } });
+    expect(plan.warnings.filter((w) => w.code === "no_sprinkler_for_sod").map((w) => `${w.audience}:${w.severity}`)).toEqual(["crew:caution"]);
+    expect(plan.warnings.find((w) => w.code === "no_sprinkler_for_sod")?.message).toMatch(/^No sprinkler: new sod needs about 0\.5 inch of water every day for its first 9 days\./);
+    expect(sodPlan().warnings.some((w) => w.code === "no_sprinkler_for_sod")).toBe(false);
+  });
+
   it("is refused together with seed on one visit: the two need different watering", () => {
     const result = parsePlanInput(withChanges({ visit: { services: ["sod_installation", "overseeding"] } }));
     expect(result.ok).toBe(false);

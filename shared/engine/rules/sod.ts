@@ -6,7 +6,7 @@ import { dailyKey, oneOffKey } from "../step-keys.ts";
 import { MOW_DOWN_RULE } from "../tables/mowing.ts";
 import type { Why } from "../tables/provenance.ts";
 import { SOD_ROOTING, SOD_WATERING } from "../tables/sod.ts";
-import type { HoldOff, PlanStep } from "../types.ts";
+import type { HoldOff, PlanStep, WarningFinding } from "../types.ts";
 
 /*
  * Sod installation. The lawn's ordinary watering (rules/watering.ts) and mowing
@@ -64,6 +64,9 @@ const TEXT = {
     "Mow only when the sod is dry and firm underfoot. Use a sharp blade, walk slowly and make wide turns so the pieces do not shift.",
   stepDownTitle: (height: string) => `Mow at ${height}, one setting lower than last time`,
   stepDownDetail: "Mow when the grass is dry, and only if it has grown about a third taller than this height.",
+  noSprinkler: (depth: string, days: number) =>
+    `No sprinkler: new sod needs about ${depth} inch of water every day for its first ${days} days. By hose alone the middle of each piece and the seams are easily missed; suggest a hose-end sprinkler on a timer.`,
+  noSprinklerReason: "Sod that dries out before it roots shrinks at the seams and browns.",
 } as const;
 
 export function isSodInstallation(ctx: PlanContext): boolean {
@@ -185,6 +188,21 @@ export function sodHoldOffs(ctx: PlanContext): HoldOff[] {
       source: SOD_ROOTING.source,
       provenance: SOD_ROOTING.provenance,
       cautions: [],
+    },
+  ];
+}
+
+/** For the crew: sod on a lawn with no sprinkler is hard to keep wet by hose. */
+export function sodWarnings(ctx: PlanContext): WarningFinding[] {
+  if (!isSodInstallation(ctx) || ctx.input.property.irrigation.kind !== "none") return [];
+  return [
+    {
+      code: "no_sprinkler_for_sod",
+      severity: "caution",
+      message: TEXT.noSprinkler(formatNumber(SOD_WATERING.dailyDepthIn, 2), SOD_WATERING.dailyUntilDay),
+      reason: TEXT.noSprinklerReason,
+      source: SOD_WATERING.source,
+      provenance: SOD_WATERING.provenance,
     },
   ];
 }
