@@ -109,8 +109,8 @@ test("a lawn found thick is offered the fall feeding instead of seed, and a prod
 
   const sent = page.waitForRequest((r) => r.url().endsWith("/api/visits") && r.method() === "POST");
   await page.getByRole("button", { name: "Save visit" }).click();
-  const body = (await sent).postDataJSON() as { lawnCondition?: string; visit: { services: string[]; seedMix: unknown[]; products: { organic?: boolean }[]; priorPreEmergent?: unknown } };
-  expect(body.lawnCondition).toBe("thick");
+  const body = (await sent).postDataJSON() as { lawn?: { lawnCondition?: string }; visit: { services: string[]; seedMix: unknown[]; products: { organic?: boolean }[]; priorPreEmergent?: unknown } };
+  expect(body.lawn?.lawnCondition).toBe("thick");
   expect(body.visit.services).toEqual(["fertiliser_only"]);
   expect(body.visit.seedMix).toEqual([]);
   expect(body.visit.products[0]?.organic).toBe(true);

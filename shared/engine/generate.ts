@@ -11,6 +11,7 @@ import { applyPlaceRules, placeRuleFindings } from "./rules/place-rules.ts";
 import { warningsForAudiences } from "./rules/audiences.ts";
 import { planWarnings } from "./rules/warnings.ts";
 import { priorPreEmergentFindings } from "./rules/pre-emergent.ts";
+import { situationHoldOffs, sodPass, slopeAndShadePasses, situationSteps, situationWarnings } from "./rules/situations.ts";
 import { wateringSteps } from "./rules/watering.ts";
 import { warmSeasonWarnings } from "./rules/warm-season.ts";
 import { frozenGroundWatering, seasonFeedCutoff } from "./rules/season.ts";
@@ -26,13 +27,15 @@ import type { HoldOff, PhaseRange, Plan, PlanStep, PlanWarning } from "./types.t
 export const ENGINE_VERSION = 3;
 
 /*
- * Post-passes every step goes through, whichever rule made it: no watering on cold or frozen
- * ground, no feeding after the season's cut-off, then the company's rules for the lawn's place
- * (which move feedings and waterings only to days the season leaves open). Rules that add
- * feeding or watering get all of them by being listed before this.
+ * Post-passes every step goes through, whichever rule made it: sod's own watering and mowing,
+ * no watering on cold or frozen ground, no feeding after the season's cut-off, the company's
+ * rules for the lawn's place (which move feedings and waterings only to days the season leaves
+ * open), then cycle-and-soak on slopes (on the days waterings finally fall) and less nitrogen in
+ * shade. Rules that add feeding or watering get all of them by being listed before this.
  */
 function postPasses(ctx: PlanContext, steps: PlanStep[]): PlanStep[] {
-  return applyPlaceRules(ctx, seasonFeedCutoff(ctx, frozenGroundWatering(ctx, steps)));
+  const seasonal = seasonFeedCutoff(ctx, frozenGroundWatering(ctx, sodPass(ctx, steps)));
+  return slopeAndShadePasses(ctx, applyPlaceRules(ctx, seasonal));
 }
 
 /** Steps the homeowner reported skipping keep their place in the plan, marked skipped. */
@@ -78,7 +81,14 @@ function cautionsUsed(groups: readonly (readonly { cautions: readonly CautionId[
  */
 export function visitWarnings(input: PlanInput): PlanWarning[] {
   const ctx = buildContext(input);
-  return warningsForAudiences(ctx, [...planWarnings(ctx), ...warmSeasonWarnings(ctx), ...placeRuleFindings(ctx), ...priorPreEmergentFindings(ctx), ...feedingProgramFindings(ctx)]);
+  return warningsForAudiences(ctx, [
+    ...planWarnings(ctx),
+    ...warmSeasonWarnings(ctx),
+    ...placeRuleFindings(ctx),
+    ...priorPreEmergentFindings(ctx),
+    ...feedingProgramFindings(ctx),
+    ...situationWarnings(ctx),
+  ]);
 }
 
 /**
@@ -89,7 +99,7 @@ export function visitWarnings(input: PlanInput): PlanWarning[] {
 export function generatePlan(input: PlanInput): Plan {
   const ctx = buildContext(input);
   const windows = holdOffWindows(ctx);
-  const holdOffs: HoldOff[] = holdOffsFor(ctx, windows);
+  const holdOffs: HoldOff[] = [...holdOffsFor(ctx, windows), ...situationHoldOffs(ctx)];
   const prep = sortSteps(fromToday(ctx, applySkips(ctx, prepSteps(ctx))));
   const steps = sortSteps(
     fromToday(
@@ -107,6 +117,7 @@ export function generatePlan(input: PlanInput): Plan {
           ...leafCleanupSteps(ctx),
           ...checkInSteps(ctx),
           ...dormantSeedingSteps(ctx),
+          ...situationSteps(ctx),
         ]),
       ),
     ),
@@ -137,6 +148,7 @@ export function generatePlan(input: PlanInput): Plan {
       ...placeRuleFindings(ctx),
       ...priorPreEmergentFindings(ctx),
       ...feedingProgramFindings(ctx),
+      ...situationWarnings(ctx),
     ]),
     summary: calculatorSummary(ctx),
     cautions: cautionsUsed([prep, steps, holdOffs]),

@@ -36,6 +36,13 @@ export interface FeedAdvice {
   readonly nitrogenLbPer1000?: number;
 }
 
+export interface CycleAndSoak {
+  readonly runsPerCycle: number;
+  readonly soakMinutes: number;
+  /** The cycle's minutes before it was split; runs never add up to more. */
+  readonly minutesBefore: number;
+}
+
 export interface PlanStep {
   /** Stable across recomputes: daily steps carry their date, one-off steps do not. */
   readonly key: string;
@@ -47,6 +54,8 @@ export interface PlanStep {
   /** Local wall-clock start times ("HH:MM") for watering cycles, all real times in the zone. */
   readonly times?: readonly string[];
   readonly minutesPerCycle?: number;
+  /** Set on slopes: each cycle is split into runs of `minutesPerCycle` with a pause between (rules/slopes.ts). */
+  readonly cycleAndSoak?: CycleAndSoak;
   readonly heightIn?: number;
   readonly feed?: FeedAdvice;
   /** Hold-off windows this step must never fall inside. */

@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { LAWN_CONDITIONS, isoDateSchema, visitSchema } from "../engine/index.ts";
+import { isoDateSchema, LAWN_CONDITIONS, SHADE_LEVELS, SLOPES, visitSchema } from "../engine/index.ts";
 import { DATE_RANGE_MESSAGE, EARLIEST_DATE, LATEST_DATE } from "../engine/schemas/common.ts";
 
 export const WIND_DIRECTIONS = ["calm", "N", "NE", "E", "SE", "S", "SW", "W", "NW", "variable"] as const;
@@ -68,12 +68,23 @@ export const applicationRecordSchema = z
   });
 export type ApplicationRecord = z.infer<typeof applicationRecordSchema>;
 
+/**
+ * Lawn facts the technician sees on site (slope, shade). Sent only when noted; they are saved on
+ * the lawn, so this visit's plan and later ones use them. Absent means "as recorded".
+ */
+/** The lawn as the crew finds it today; what is given becomes the lawn's record before the plan is made. */
+export const lawnOnSiteSchema = z.object({
+  lawnCondition: z.enum(LAWN_CONDITIONS, { message: "Pick the lawn's condition from the list" }).optional(),
+  slope: z.enum(SLOPES, { error: "Pick the slope from the list" }).optional(),
+  shade: z.enum(SHADE_LEVELS, { error: "Pick the shade from the list" }).optional(),
+});
+export type LawnOnSite = z.infer<typeof lawnOnSiteSchema>;
+
 /** Logging a visit: the engine's visit fields plus which lawn, the conditions, a regulated-application record and notes. */
 export const logVisitSchema = z.object({
   propertyId: z.number().int().positive(),
-  /** The lawn as the crew found it today; when given it becomes the lawn's recorded condition, before the plan is made. */
-  lawnCondition: z.enum(LAWN_CONDITIONS, { message: "Pick the lawn's condition from the list" }).optional(),
   visit: visitSchema,
+  lawn: lawnOnSiteSchema.optional(),
   conditions: visitConditionsSchema.optional(),
   applicationRecord: applicationRecordSchema.optional(),
   notes: z.string().trim().max(4000).optional(),

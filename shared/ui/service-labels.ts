@@ -12,6 +12,7 @@ export const SERVICE_LABELS: Record<Service, string> = {
   starter_fertiliser: "Starter fertiliser",
   fertiliser_only: "Fertiliser only",
   top_dressing: "Top dressing",
+  sod_installation: "Sod installation",
 };
 
 /** A service code from the API as words; unknown codes (a newer server) are shown tidied up. */

@@ -1,5 +1,6 @@
 import type { Db } from "../../db.ts";
 import type { PropertyDetail, PropertySummary } from "#shared/schemas/properties";
+import type { LawnOnSite } from "#shared/schemas/visits";
 
 type Row = {
   id: number; customer_id: number; label: string; street: string; town: string; region: string;
@@ -26,4 +27,11 @@ export async function listForCustomer(db: Db, companyId: number, customerId: num
 export async function findInCompany(db: Db, companyId: number, propertyId: number): Promise<PropertyDetail | undefined> {
   const row = (await baseQuery(db, companyId).select("properties.lawn").where("properties.id", propertyId).first()) as (Row & { lawn: Record<string, unknown> }) | undefined;
   return row ? { ...toSummary(row), lawn: row.lawn } : undefined;
+}
+
+/** Sets the noted lawn facts on the lawn's record, leaving its other facts as they are (jsonb merge in one statement). */
+export async function mergeLawnFacts(db: Db, propertyId: number, facts: LawnOnSite): Promise<void> {
+  const noted = Object.fromEntries(Object.entries(facts).filter(([, v]) => v !== undefined));
+  if (Object.keys(noted).length === 0) return;
+  await db("properties").where({ id: propertyId }).update({ lawn: db.raw("lawn || ?::jsonb", [JSON.stringify(noted)]) });
 }

@@ -78,9 +78,3 @@ export async function moveVisit(trx: Db, visitId: number, date: string): Promise
   await trx("service_visits").where({ id: visitId }).update({ visit_date: date });
 }
 
-/** The crew's reading of the lawn today replaces the recorded one; the lawn's other facts stay. */
-export async function recordLawnCondition(trx: Db, propertyId: number, condition: string): Promise<void> {
-  await trx("properties")
-    .where({ id: propertyId })
-    .update({ lawn: trx.raw("coalesce(lawn, '{}'::jsonb) || jsonb_build_object('lawnCondition', ?::text)", [condition]) });
-}

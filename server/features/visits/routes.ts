@@ -3,10 +3,10 @@ import { logVisitSchema, moveVisitSchema } from "#shared/schemas/visits";
 import type { AppDeps } from "../../app.ts";
 import { notFound } from "../../http/errors.ts";
 import { route, type RouteSpec } from "../../http/route.ts";
-import { findInCompany } from "../properties/repo.ts";
+import { findInCompany, mergeLawnFacts } from "../properties/repo.ts";
 import { createPlanForVisit, regeneratePlan, type PlanChangeHook } from "../plans/service.ts";
 import { planIdOfVisit } from "../plans/plans-repo.ts";
-import { insertVisit, loadVisitWithProperty, moveVisit, recordLawnCondition } from "./repo.ts";
+import { insertVisit, loadVisitWithProperty, moveVisit } from "./repo.ts";
 import { noticeOfNewPlan } from "../notices/service.ts";
 
 const staff = ["technician", "manager"] as const;
@@ -25,7 +25,8 @@ export function visitRoutes(deps: AppDeps, onChange?: PlanChangeHook): RouteSpec
         const { date, services, ...details } = body.visit;
         // The visit and its whole plan land together or not at all.
         const created = await db.transaction(async (trx) => {
-          if (body.lawnCondition) await recordLawnCondition(trx, property.id, body.lawnCondition);
+          // Condition, slope and shade seen today belong to the lawn; saved first so this visit's plan uses them.
+          if (body.lawn) await mergeLawnFacts(trx, property.id, body.lawn);
           const visitId = await insertVisit(trx, {
             propertyId: property.id,
             technicianId: user.role === "technician" ? user.id : null,

@@ -111,7 +111,7 @@ describe("what the visit form asks that decides the plan", () => {
     };
     const res = await technician
       .post("/api/visits")
-      .send({ propertyId: lawnOwner.propertyId, lawnCondition: "thick", visit })
+      .send({ propertyId: lawnOwner.propertyId, lawn: { lawnCondition: "thick" }, visit })
       .expect(201);
     const { visitId, planId } = res.body as { visitId: number; planId: number };
 
@@ -135,7 +135,7 @@ describe("what the visit form asks that decides the plan", () => {
     const visitDate = addDays(localDateAt("America/New_York"), -2);
     const res = await technician.post("/api/visits").send({
       propertyId: ruthPropertyId,
-      lawnCondition: "lush",
+      lawn: { lawnCondition: "lush" },
       visit: {
         date: visitDate,
         services: ["overseeding"],
@@ -147,7 +147,7 @@ describe("what the visit form asks that decides the plan", () => {
     });
     expect(res.status).toBe(400);
     expect(res.body.error.fields).toMatchObject({
-      lawnCondition: "Pick the lawn's condition from the list",
+      "lawn.lawnCondition": "Pick the lawn's condition from the list",
       "visit.priorPreEmergent.appliedOn": "Must be on or before the visit date",
     });
   });

@@ -8,6 +8,8 @@ import type { Why } from "../tables/provenance.ts";
 import { TAPER_RULE } from "../tables/watering.ts";
 import type { PlanStep, WarningFinding } from "../types.ts";
 import { inRanges } from "./season.ts";
+import { isSodInstallation } from "./sod.ts";
+import { SOD_WATERING } from "../tables/sod.ts";
 
 /*
  * The company's rules for the place a lawn is in: fertilizer blackout dates, phosphorus only
@@ -108,8 +110,9 @@ function rekey(step: PlanStep, date: string): string {
   return old === null ? step.key : step.key.replace(old, date);
 }
 
-/** The last day offset of watering meant for a new lawn (germination and the taper after it); null without seed. */
+/** The last day offset of watering meant for a new lawn (germination and the taper after it, or new sod's own); null otherwise. */
 function newLawnLastDay(ctx: PlanContext): number | null {
+  if (isSodInstallation(ctx)) return Math.min(ctx.timeline.planEnd, SOD_WATERING.lastDay);
   const end = ctx.timeline.germinationEnd;
   if (end === null) return null;
   return Math.min(ctx.timeline.planEnd, end + TAPER_RULE.onceADayDays + TAPER_RULE.everyOtherDayDays);

@@ -15,10 +15,19 @@ export const SERVICES = [
   "starter_fertiliser",
   "fertiliser_only",
   "top_dressing",
+  "sod_installation",
 ] as const;
 export type Service = (typeof SERVICES)[number];
 
 export const SEEDING_SERVICES: readonly Service[] = ["overseeding", "slit_seeding", "new_seeding"];
+
+/** How steep the lawn is: slopes shed water (cycle-and-soak watering) and seed (erosion control). */
+export const SLOPES = ["none", "gentle", "steep"] as const;
+export type Slope = (typeof SLOPES)[number];
+
+/** How much of the day the lawn is shaded: shade calls for shade-tolerant seed and less nitrogen. */
+export const SHADE_LEVELS = ["none", "partial", "heavy"] as const;
+export type ShadeLevel = (typeof SHADE_LEVELS)[number];
 
 /** Seed-mix percentages may be rounded on the tag, hence the ±0.5 slack. */
 export const SEED_MIX_SUM_TOLERANCE = 0.5;
@@ -75,6 +84,10 @@ export const visitSchema = z
     // Cross-field checks run even when single fields failed; guard the shapes.
     if (!Array.isArray(visit.services) || !Array.isArray(visit.seedMix)) return;
     const seeding = visit.services.some((s) => SEEDING_SERVICES.includes(s));
+    if (visit.services.includes("sod_installation") && (seeding || visit.seedMix.length > 0)) {
+      // Sod wants a deep soak and daily deep watering, seed light frequent cycles: one plan can't give both.
+      ctx.addIssue({ code: "custom", path: ["services"], message: "Log sod and seed as separate visits: they need different watering" });
+    }
     if (seeding && visit.seedMix.length === 0) {
       // The plan's watering and mowing dates depend on the species sown.
       ctx.addIssue({ code: "custom", path: ["seedMix"], message: "List the seed used for this seeding" });
@@ -130,6 +143,10 @@ export const propertySchema = z
     hemisphere: z.enum(["north", "south"]).optional(),
     /** Optional: without it the hemisphere's default first frost is assumed, except in frost-free zones (tables/seasons.ts). */
     expectedFirstFrost: isoDateSchema.optional(),
+    /** Optional: unknown counts as flat. */
+    slope: z.enum(SLOPES).optional(),
+    /** Optional: unknown counts as full sun. */
+    shade: z.enum(SHADE_LEVELS).optional(),
   })
   .superRefine((property, ctx) => {
     const grass = property.grassType;

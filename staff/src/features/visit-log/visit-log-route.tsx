@@ -65,7 +65,7 @@ export function VisitLogRoute() {
         if (!form.getValues("visit.areaFt2") && property.lawnAreaFt2) form.setValue("visit.areaFt2", String(property.lawnAreaFt2), { shouldDirty: true });
         // Likewise the lawn's recorded condition, for the technician to confirm or correct.
         const recorded = property.lawn.lawnCondition;
-        if (!form.getValues("lawnCondition") && isLawnCondition(recorded)) form.setValue("lawnCondition", recorded, { shouldDirty: true });
+        if (!form.getValues("lawn.lawnCondition") && isLawnCondition(recorded)) form.setValue("lawn.lawnCondition", recorded, { shouldDirty: true });
       })
       .catch(() => undefined);
   };
@@ -123,7 +123,7 @@ export function VisitLogRoute() {
               <PropertyPicker chosen={lawn} onChoose={chooseLawn} error={errors.propertyId} />
             </FormSection>
             <VisitBasics />
-            <LawnToday />
+            <LawnToday propertyId={lawn?.propertyId ?? null} />
             <SeedFields />
             <PriorPreEmergentFields />
             <ProductFields />

@@ -1,10 +1,10 @@
 import { use } from "react";
 import { useFormContext, useWatch } from "react-hook-form";
-import { SPECIES, SPRINKLER_TYPES } from "#shared/engine/index";
+import { SHADE_LEVELS, SLOPES, SPECIES, SPRINKLER_TYPES } from "#shared/engine/index";
 import { FieldError, SelectField, TextField } from "#shared/ui/index";
 import type { IrrigationKind, LawnCondition, PreviewFormValues } from "../lib/form-values.ts";
 import { FieldErrorsContext, fieldId } from "../lib/field-errors.ts";
-import { IRRIGATION_LABELS, LAWN_CONDITION_LABELS, SPRINKLER_TYPE_LABELS, speciesLabel } from "../lib/labels.ts";
+import { IRRIGATION_LABELS, LAWN_CONDITION_LABELS, SHADE_LABELS, SLOPE_LABELS, SPRINKLER_TYPE_LABELS, speciesLabel } from "../lib/labels.ts";
 import { daysAfter } from "../lib/local-dates.ts";
 import { Checkbox } from "./checkbox.tsx";
 import { CheckboxGroup } from "./checkbox-group.tsx";
@@ -17,6 +17,8 @@ const seasonOptions = [
 ];
 const conditionOptions = (Object.keys(LAWN_CONDITION_LABELS) as LawnCondition[]).map((value) => ({ value, label: LAWN_CONDITION_LABELS[value] }));
 const irrigationOptions = (Object.keys(IRRIGATION_LABELS) as IrrigationKind[]).map((value) => ({ value, label: IRRIGATION_LABELS[value] }));
+const slopeOptions = SLOPES.map((value) => ({ value, label: SLOPE_LABELS[value] }));
+const shadeOptions = SHADE_LEVELS.map((value) => ({ value, label: SHADE_LABELS[value] }));
 const sprinklerTypeOptions = SPRINKLER_TYPES.map((value) => ({ value, label: SPRINKLER_TYPE_LABELS[value] }));
 
 /** The lawn, its watering and its mower, and where it is. */
@@ -51,6 +53,10 @@ export function PropertyFields() {
         {...register("property.grassType.season")}
       />
       <SelectField id={fieldId("property.lawnCondition")} label="Lawn condition" error={errors["property.lawnCondition"]} options={conditionOptions} {...register("property.lawnCondition")} />
+      <div className="grid gap-4 sm:grid-cols-2">
+        <SelectField id={fieldId("property.slope")} label="Slope" placeholderOption="Not noted" error={errors["property.slope"]} options={slopeOptions} {...register("property.slope")} />
+        <SelectField id={fieldId("property.shade")} label="Shade" placeholderOption="Not noted" error={errors["property.shade"]} options={shadeOptions} {...register("property.shade")} />
+      </div>
 
       <SelectField id={fieldId("property.irrigation.kind")} label="Watering" error={errors["property.irrigation.kind"]} options={irrigationOptions} {...register("property.irrigation.kind")} />
       {irrigationKind !== "none" && (

@@ -30,6 +30,8 @@ export function defaultPreviewValues(visitDate = nextAutumnVisitDate()): Preview
     property: {
       grassType: { species: ["tall_fescue"], season: "" },
       lawnCondition: "thin",
+      slope: "",
+      shade: "",
       irrigation: { kind: "in_ground", sprinklerType: "", zones: "4", precipitationRateInPerHour: "" },
       currentMowingHeightIn: "4",
       mowerHighestSettingIn: "4",

@@ -1,4 +1,4 @@
-import type { Service, Species, SprinklerType } from "#shared/engine/index";
+import type { ShadeLevel, Service, Slope, Species, SprinklerType } from "#shared/engine/index";
 
 /*
  * What the form holds. Numbers stay as the text the person typed, so a half-typed
@@ -39,6 +39,9 @@ export interface PreviewFormValues {
   property: {
     grassType: { species: Species[]; season: "" | "cool" | "warm" };
     lawnCondition: LawnCondition;
+    /** Empty when not noted (treated as flat / full sun). */
+    slope: "" | Slope;
+    shade: "" | ShadeLevel;
     /** Empty when the crew does not know the sprinkler type. */
     irrigation: { kind: IrrigationKind; sprinklerType: "" | SprinklerType; zones: string; precipitationRateInPerHour: string };
     currentMowingHeightIn: string;

@@ -1,4 +1,4 @@
-import { SPECIES_FACTS, type HoldOffKind, type Phase, type Provenance, type Service, type Species, type SprinklerType } from "#shared/engine/index";
+import { SPECIES_FACTS, type HoldOffKind, type Phase, type Provenance, type Service, type ShadeLevel, type Slope, type Species, type SprinklerType } from "#shared/engine/index";
 import type { IrrigationKind, LawnCondition } from "./form-values.ts";
 
 /** Plain names for the engine's codes, as staff say them. */
@@ -11,6 +11,7 @@ export const SERVICE_LABELS: Record<Service, string> = {
   starter_fertiliser: "Starter fertiliser",
   fertiliser_only: "Fertiliser only",
   top_dressing: "Top dressing",
+  sod_installation: "Sod installation",
 };
 
 export const LAWN_CONDITION_LABELS: Record<LawnCondition, string> = {
@@ -19,6 +20,9 @@ export const LAWN_CONDITION_LABELS: Record<LawnCondition, string> = {
   thick_dormant: "Thick, but dormant",
   thick: "Thick",
 };
+
+export const SLOPE_LABELS: Record<Slope, string> = { none: "Flat or nearly flat", gentle: "Gentle slope", steep: "Steep slope" };
+export const SHADE_LABELS: Record<ShadeLevel, string> = { none: "Full sun", partial: "Partial shade", heavy: "Heavy shade" };
 
 export const IRRIGATION_LABELS: Record<IrrigationKind, string> = {
   in_ground: "In-ground sprinkler system",
@@ -91,6 +95,8 @@ const FIELD_LABELS: Record<string, string> = {
   "property.grassType.species": "Grass in the lawn",
   "property.grassType.season": "Grass season",
   "property.lawnCondition": "Lawn condition",
+  "property.slope": "Slope",
+  "property.shade": "Shade",
   "property.irrigation": "Watering",
   "property.irrigation.kind": "Watering",
   "property.irrigation.zones": "Zones",

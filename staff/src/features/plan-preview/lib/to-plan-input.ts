@@ -59,6 +59,8 @@ export function checkPreviewForm(values: PreviewFormValues): FormCheck {
         ...(property.grassType.season ? { season: property.grassType.season } : {}),
       },
       lawnCondition: property.lawnCondition,
+      ...(property.slope ? { slope: property.slope } : {}),
+      ...(property.shade ? { shade: property.shade } : {}),
       // Zones and sprinkler rate mean nothing without a sprinkler; the form keeps them in case it comes back.
       irrigation: {
         kind: irrigation.kind,

@@ -11,6 +11,11 @@ export function useLogVisit() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: logVisit,
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: ["customers"] }),
+    onSuccess: (_saved, body) =>
+      Promise.all([
+        queryClient.invalidateQueries({ queryKey: ["customers"] }),
+        // Slope and shade noted on the visit are now on the lawn's record.
+        ...(body.lawn ? [queryClient.invalidateQueries({ queryKey: ["properties", body.propertyId] })] : []),
+      ]),
   });
 }

@@ -5,6 +5,7 @@ import { useFieldError } from "../lib/field-errors.ts";
 import { fieldId, type VisitFormValues } from "../lib/form-values.ts";
 import { isSeedingVisit } from "../lib/prior-pre-emergent.ts";
 import { FormSection } from "./form-section.tsx";
+import { LawnOnSiteFields } from "./lawn-on-site-fields.tsx";
 
 const CONDITION_LABELS: Record<LawnCondition, string> = {
   thin: "Thin or patchy",
@@ -18,10 +19,10 @@ const CONDITION_LABELS: Record<LawnCondition, string> = {
  * A thick lawn doesn't need seed, so the fall feeding program is offered instead, and a seeding
  * can be turned into a feeding in one tap.
  */
-export function LawnToday() {
+export function LawnToday({ propertyId }: { propertyId: number | null }) {
   const { control, register, setValue, getValues } = useFormContext<VisitFormValues>();
-  const [visit, condition] = useWatch({ control, name: ["visit", "lawnCondition"] });
-  const error = useFieldError("lawnCondition");
+  const [visit, condition] = useWatch({ control, name: ["visit", "lawn.lawnCondition"] });
+  const error = useFieldError("lawn.lawnCondition");
   const seeding = isSeedingVisit(visit);
 
   const switchToFeeding = () => {
@@ -32,16 +33,17 @@ export function LawnToday() {
   };
 
   return (
-    <FormSection legend="The lawn today">
+    <FormSection legend="The lawn today" hint="Saved on the lawn's record and used for this plan and later ones.">
       <SelectField
-        id={fieldId("lawnCondition")}
+        id={fieldId("lawn.lawnCondition")}
         label="Lawn condition"
         hint="Filled in from the lawn's record; change it if the lawn looks different today."
         placeholderOption="As recorded"
         error={error}
         options={LAWN_CONDITIONS.map((c) => ({ value: c, label: CONDITION_LABELS[c] }))}
-        {...register("lawnCondition")}
+        {...register("lawn.lawnCondition")}
       />
+      <LawnOnSiteFields propertyId={propertyId} />
       {condition === "thick" && (
         <Notice title="A thick lawn doesn't need seed" tone={seeding ? "warning" : "info"}>
           <div data-testid="thick-lawn-notice" className="flex flex-col gap-2">

@@ -10,13 +10,13 @@ const box = "flex min-w-0 flex-col gap-3 rounded-xl border border-line bg-surfac
 /** The engine's warnings for the figures as typed, so the technician can still change them before saving. */
 export function VisitWarnings({ propertyId }: { propertyId: number | null }) {
   const { control } = useFormContext<VisitFormValues>();
-  const [visit, lawnCondition] = useWatch({ control, name: ["visit", "lawnCondition"] });
+  const [visit, lawnToday] = useWatch({ control, name: ["visit", "lawn"] });
   const property = useProperty(propertyId);
-  const visitJson = JSON.stringify(visit);
+  const visitJson = JSON.stringify({ visit, lawn: lawnToday });
   // Recomputed only when a figure or the lawn changes, not on every render of the form.
   const result = useMemo(
-    () => warningsForVisit({ visit: JSON.parse(visitJson), lawnCondition } as VisitFormValues, property.data),
-    [visitJson, lawnCondition, property.data],
+    () => warningsForVisit(JSON.parse(visitJson) as VisitFormValues, property.data),
+    [visitJson, property.data],
   );
 
   if (propertyId === null) return <p className={`${box} text-ink-soft`}>Pick the customer's lawn to check these figures against it.</p>;

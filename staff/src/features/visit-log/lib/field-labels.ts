@@ -1,6 +1,6 @@
 const LABELS: Record<string, string> = {
   propertyId: "Customer's lawn",
-  lawnCondition: "Lawn condition today",
+  "lawn.lawnCondition": "Lawn condition today",
   "visit.date": "Date",
   "visit.services": "Services done",
   "visit.areaFt2": "Area treated",
@@ -11,6 +11,8 @@ const LABELS: Record<string, string> = {
   "visit.priorPreEmergent.appliedOn": "Date the weed preventer went down",
   "visit.priorPreEmergent.activeIngredient": "Weed preventer's active ingredient",
   seedBagLb: "Seed bag size",
+  "lawn.slope": "Slope",
+  "lawn.shade": "Shade",
   "conditions.temperatureF": "Temperature",
   "conditions.windMph": "Wind speed",
   "conditions.windDirection": "Wind direction",

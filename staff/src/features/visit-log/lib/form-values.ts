@@ -1,6 +1,7 @@
-import type { LawnCondition, PreEmergentIngredient, PriorPreEmergentProduct, Service, Species } from "#shared/engine/index";
+import type { PreEmergentIngredient, PriorPreEmergentProduct, Service, Species } from "#shared/engine/index";
 import { localToday } from "#shared/ui/index";
 import { WIND_DIRECTIONS } from "#shared/schemas/visits";
+import { emptyLawnOnSite, type LawnOnSiteValues } from "./lawn-on-site.ts";
 
 /*
  * The form keeps what was typed, as text; it is turned into the API's numbers on save
@@ -56,8 +57,6 @@ export interface ApplicationRecord {
 
 export interface VisitFormValues {
   propertyId: string;
-  /** The lawn as found today ("" until the lawn's recorded condition is filled in); absent in older drafts. */
-  lawnCondition?: LawnCondition | "";
   visit: {
     date: string;
     services: Service[];
@@ -71,6 +70,8 @@ export interface VisitFormValues {
     priorPreEmergent?: PriorPreEmergentAnswer;
   };
   seedBagLb: string;
+  /** The lawn as found today: condition, slope and shade (components/lawn-today.tsx); saved on the lawn's record. */
+  lawn: LawnOnSiteValues;
   conditions: { temperatureF: string; windMph: string; windDirection: string };
   notes: string;
   regulated: boolean;
@@ -95,9 +96,9 @@ export const emptyApplication = (): ApplicationRecord => ({
 export function defaultVisitForm(applicatorName = ""): VisitFormValues {
   return {
     propertyId: "",
-    lawnCondition: "",
     visit: { date: localToday(), services: [], seedMix: [], seedRateLbPer1000: "", areaFt2: "", products: [], priorPreEmergent: emptyPriorPreEmergent() },
     seedBagLb: "50",
+    lawn: emptyLawnOnSite(),
     conditions: { temperatureF: "", windMph: "", windDirection: "" },
     notes: "",
     regulated: false,

@@ -2,6 +2,7 @@ import { SEED_MIX_SUM_TOLERANCE } from "#shared/engine/index";
 import { logVisitSchema, type LogVisit } from "#shared/schemas/visits";
 import { compact, toFormFields, type ApplicationRecordBody, type VisitConditionsBody } from "./application-record.ts";
 import type { VisitFormValues } from "./form-values.ts";
+import { toLawnOnSite } from "./lawn-on-site.ts";
 import { parseNumber } from "./numbers.ts";
 import { priorPreEmergentBody } from "./prior-pre-emergent.ts";
 
@@ -104,7 +105,6 @@ export function checkVisitForm(values: VisitFormValues): CheckedVisit {
 
   const raw = {
     propertyId: Number(values.propertyId) || undefined,
-    lawnCondition: values.lawnCondition || undefined,
     visit: {
       date: v.date,
       services: v.services,
@@ -115,6 +115,7 @@ export function checkVisitForm(values: VisitFormValues): CheckedVisit {
       ...(v.soilTestCallsForPhosphorus ? { soilTestCallsForPhosphorus: true } : {}),
       priorPreEmergent,
     },
+    lawn: toLawnOnSite(values.lawn),
     conditions,
     applicationRecord,
     notes,

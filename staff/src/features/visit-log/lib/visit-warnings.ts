@@ -1,6 +1,7 @@
 import { parsePlanInput, visitWarnings, type PlanWarning } from "#shared/engine/index";
 import type { PropertyDetail } from "#shared/schemas/properties";
 import type { VisitFormValues } from "./form-values.ts";
+import { toLawnOnSite } from "./lawn-on-site.ts";
 import { parseNumber } from "./numbers.ts";
 import { priorPreEmergentBody } from "./prior-pre-emergent.ts";
 
@@ -51,8 +52,8 @@ export function warningsForVisit(values: VisitFormValues, property: PropertyDeta
         ...(v.soilTestCallsForPhosphorus ? { soilTestCallsForPhosphorus: true } : {}),
         priorPreEmergent: priorPreEmergentBody(v),
       },
-      // The condition picked on the form is what the saved visit records, so the plan reads it.
-      property: { ...property.lawn, ...(values.lawnCondition ? { lawnCondition: values.lawnCondition } : {}), timeZone: property.timeZone },
+      // The condition, slope and shade picked on the form win over the record, as they will once saved.
+      property: { ...property.lawn, ...toLawnOnSite(values.lawn), timeZone: property.timeZone },
     };
   } catch (error) {
     if (error instanceof Incomplete) return { state: "incomplete" };
