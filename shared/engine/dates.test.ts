@@ -27,6 +27,17 @@ describe("calendar-date arithmetic", () => {
     expect(isValidIsoDate("2100-02-29")).toBe(false);
   });
 
+  it("parses exactly the texts the YYYY-MM-DD pattern accepts (independent check with the regex)", () => {
+    const pattern = /^(\d{4})-(\d{2})-(\d{2})$/;
+    const texts = ["2026-09-10", "2026-9-10", "2026-09-1a", "２０２６-09-10", "2026/09/10", "2026-09-10 ", "2026-02-29", "2028-02-29", "-026-09-10", "2026-13-01", "2026-00-10", "a026-09-10"];
+    for (const text of texts) {
+      const match = pattern.exec(text);
+      const valid = match !== null && isValidIsoDate(text);
+      if (valid) expect(toDayNumber(text)).toBe(Math.round(Date.UTC(Number(match[1]), Number(match[2]) - 1, Number(match[3])) / 86_400_000));
+      else expect(() => toDayNumber(text)).toThrow(RangeError);
+    }
+  });
+
   it("rejects malformed and impossible dates", () => {
     for (const bad of ["2026-13-01", "2026-04-31", "2026-4-1", "20260401", "", "2026-02-30T00:00"]) {
       expect(isValidIsoDate(bad)).toBe(false);
