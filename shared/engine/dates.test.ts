@@ -1,6 +1,6 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { addDays, daysBetween, fromDayNumber, isValidIsoDate, toDayNumber } from "./dates.ts";
+import { addDays, daysBetween, fromDayNumber, isValidIsoDate, localTimeFromMinutes, minutesOfLocalTime, toDayNumber } from "./dates.ts";
 
 describe("calendar-date arithmetic", () => {
   it("agrees with Date.UTC's day count for any day from 1900 to 2200 (independent implementation)", () => {
@@ -35,6 +35,17 @@ describe("calendar-date arithmetic", () => {
       const valid = match !== null && isValidIsoDate(text);
       if (valid) expect(toDayNumber(text)).toBe(Math.round(Date.UTC(Number(match[1]), Number(match[2]) - 1, Number(match[3])) / 86_400_000));
       else expect(() => toDayNumber(text)).toThrow(RangeError);
+    }
+  });
+
+  it("reads exactly the HH:MM texts the local-time pattern accepts (independent check with the regex)", () => {
+    const pattern = /^([01]\d|2[0-3]):([0-5]\d)$/;
+    const texts = ["00:00", "06:00", "23:59", "24:00", "19:60", "9:00", "09:0", "09-00", "0a:00", "09:00 ", "２3:00", "12:5x"];
+    for (let minute = 0; minute < 1440; minute += 7) texts.push(localTimeFromMinutes(minute));
+    for (const text of texts) {
+      const match = pattern.exec(text);
+      if (match) expect(minutesOfLocalTime(text)).toBe(Number(match[1]) * 60 + Number(match[2]));
+      else expect(() => minutesOfLocalTime(text)).toThrow(RangeError);
     }
   });
 

@@ -133,10 +133,18 @@ export function isValidLocalTime(value: unknown): value is string {
   return typeof value === "string" && LOCAL_TIME.test(value);
 }
 
+/** Throws unless `time` is "HH:MM" (00:00–23:59), as LOCAL_TIME accepts; parsed by character codes, once per start time per plan. */
 export function minutesOfLocalTime(time: string): number {
-  const match = LOCAL_TIME.exec(time);
-  if (!match) throw new RangeError(`Not a local time: ${time}`);
-  return Number(match[1]) * 60 + Number(match[2]);
+  if (time.length === 5 && time.charCodeAt(2) === 58) {
+    const h1 = time.charCodeAt(0) - DIGIT_0;
+    const h2 = time.charCodeAt(1) - DIGIT_0;
+    const m1 = time.charCodeAt(3) - DIGIT_0;
+    const m2 = time.charCodeAt(4) - DIGIT_0;
+    const digits = h1 >= 0 && h1 <= 9 && h2 >= 0 && h2 <= 9 && m1 >= 0 && m1 <= 5 && m2 >= 0 && m2 <= 9;
+    const hour = h1 * 10 + h2;
+    if (digits && hour <= 23) return hour * 60 + m1 * 10 + m2;
+  }
+  throw new RangeError(`Not a local time: ${time}`);
 }
 
 export function localTimeFromMinutes(minutes: number): string {

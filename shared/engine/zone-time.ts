@@ -128,6 +128,8 @@ const isOutsideGaps = (gaps: readonly Gap[], wanted: number) => {
 
 /** Clock questions for one plan's date range, answered without Intl after set-up. */
 export interface ZoneClock {
+  /** No wall-clock minute is skipped anywhere in the plan's days: every time is real as given. */
+  readonly gapFree: boolean;
   isReal(dayNumber: number, minuteOfDay: number): boolean;
   /** The minute if real, else the first real quarter-hour after it that day. */
   nearestReal(dayNumber: number, minuteOfDay: number): number;
@@ -138,6 +140,7 @@ export function zoneClock(zone: string, fromDay: number, toDay: number): ZoneClo
   const isReal = (dayNumber: number, minuteOfDay: number) =>
     gaps.length === 0 || isOutsideGaps(gaps, dayNumber * MINUTES_PER_DAY + minuteOfDay);
   return {
+    gapFree: gaps.length === 0,
     isReal,
     nearestReal(dayNumber, minuteOfDay) {
       if (isReal(dayNumber, minuteOfDay)) return minuteOfDay;
