@@ -38,6 +38,7 @@ export function StaffLayout() {
     { to: "/visits/new", label: "Log a visit" },
     { to: "/customers", label: "Customers" },
     { to: "/plan-preview", label: "Plan preview" },
+    { to: "/sources", label: "Sources to check" },
   ];
   if (user?.role === "manager") nav.push(...managerNav);
   if (outboxAvailable) nav.push({ to: "/outbox", label: "Outbox (development)" });
