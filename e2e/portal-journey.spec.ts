@@ -87,8 +87,7 @@ test("today's steps for the seeded visit: tick one off, undo, skip with a reason
   await step.getByText("Why?").click();
   await expect(step.getByText("New seed dies if it dries out")).toBeVisible();
   await expect(step.getByText("Source:")).toBeHidden();
-  const sources = step.getByText("Sources", { exact: true });
-  await sources.focus();
+  await step.locator("summary", { hasText: "Sources" }).focus();
   await page.keyboard.press("Enter");
   await expect(step.getByText("Source:")).toBeVisible();
   await expect(step.getByText("(published guidance)")).toBeVisible();
@@ -120,10 +119,10 @@ test("the plan shows every phase day by day, marks today, and prints without the
   // A photo check-in's timing rests on emergence days still marked "from memory": never cited to the homeowner.
   const photoStep = page
     .locator("div", { has: page.getByText("Send us a photo of the lawn", { exact: true }) })
-    .filter({ has: page.getByText("Why?", { exact: true }) })
+    .filter({ has: page.locator("summary", { hasText: "Why?" }) })
     .last();
-  await photoStep.getByText("Why?", { exact: true }).click();
-  await photoStep.getByText("Sources", { exact: true }).click();
+  await photoStep.locator("summary", { hasText: "Why?" }).click();
+  await photoStep.locator("summary", { hasText: "Sources" }).click();
   await expect(photoStep.getByText("Based on common lawn-care practice. We are still checking it against a published guide.")).toBeVisible();
   await expect(photoStep.getByText("Source:")).toHaveCount(0);
   await expect(photoStep.getByText(/land-grant/)).toHaveCount(0);
