@@ -218,6 +218,11 @@ function taperStep(ctx: PlanContext, day: number, stage: TaperStage, first: bool
   };
 }
 
+/** Heavy rain was reported for that day (a function of its own: no closure made per plan). */
+function rained(ctx: PlanContext, day: number): boolean {
+  return ctx.rainDays.has(ctx.visitDay + day);
+}
+
 /** Deep-watering days from `from` to `to` inclusive, `perWeek` of them in each 7-day block. */
 function deepWateringDays(from: number, to: number, perWeek: number): number[] {
   const offsets = DEEP_WATERING_DAY_OFFSETS[perWeek] ?? [0];
@@ -235,9 +240,8 @@ export function wateringSteps(ctx: PlanContext): PlanStep[] {
   // cycles: those are not cut, because the frost warning already flags that
   // timing as a risk and seed left dry dies at once.
   const stopDay = ctx.frostDay !== null ? Math.min(ctx.frostDay - 1, timeline.planEnd) : timeline.planEnd;
-  const rained = (day: number) => ctx.rainDays.has(ctx.visitDay + day);
   const push = (day: number, make: () => PlanStep) => {
-    steps.push(rained(day) ? rainNote(ctx, day) : make());
+    steps.push(rained(ctx, day) ? rainNote(ctx, day) : make());
   };
   const deepStart = parseStarts([program.deepWateringTime]);
   const maturing = deepWatering(ctx, program.maturingWateringsPerWeek);
@@ -268,7 +272,7 @@ export function wateringSteps(ctx: PlanContext): PlanStep[] {
     });
     const light: LightWatering = { minutes: lightMinutes, starts, usual: germinationTexts(ctx, lightMinutes, starts.texts) };
     // The busiest loops push directly rather than through `push`: no closure per day.
-    for (let day = 1; day <= timeline.germinationEnd; day++) steps.push(rained(day) ? rainNote(ctx, day) : germinationStep(ctx, day, light));
+    for (let day = 1; day <= timeline.germinationEnd; day++) steps.push(rained(ctx, day) ? rainNote(ctx, day) : germinationStep(ctx, day, light));
 
     // Taper after the first mowing: once a day, then every other day, then deep.
     const establishmentLast = Math.min(timeline.establishmentEnd, stopDay);
@@ -278,10 +282,10 @@ export function wateringSteps(ctx: PlanContext): PlanStep[] {
     const daily = deepWatering(ctx, 7);
     const everyOther = deepWatering(ctx, 3.5);
     for (let day = onceFrom; day < everyOtherFrom && day <= establishmentLast; day++) {
-      steps.push(rained(day) ? rainNote(ctx, day) : taperStep(ctx, day, "once_a_day", day === onceFrom, daily, deepStart));
+      steps.push(rained(ctx, day) ? rainNote(ctx, day) : taperStep(ctx, day, "once_a_day", day === onceFrom, daily, deepStart));
     }
     for (let day = everyOtherFrom; day < deepFrom && day <= establishmentLast; day += 2) {
-      steps.push(rained(day) ? rainNote(ctx, day) : taperStep(ctx, day, "every_other_day", day === everyOtherFrom, everyOther, deepStart));
+      steps.push(rained(ctx, day) ? rainNote(ctx, day) : taperStep(ctx, day, "every_other_day", day === everyOtherFrom, everyOther, deepStart));
     }
     const establishment = deepWatering(ctx, program.establishmentWateringsPerWeek);
     for (const day of deepWateringDays(deepFrom, establishmentLast, program.establishmentWateringsPerWeek)) {
@@ -300,12 +304,12 @@ export function wateringSteps(ctx: PlanContext): PlanStep[] {
       deepStep(ctx, 0, maturing, deepStart, `${feeding ? "Water the fertilizer in today" : "Water the lawn deeply today"}${amount}`),
     );
     for (const day of deepWateringDays(3, Math.min(timeline.establishmentEnd, stopDay), program.maturingWateringsPerWeek)) {
-      steps.push(rained(day) ? rainNote(ctx, day) : deepStep(ctx, day, maturing, deepStart));
+      steps.push(rained(ctx, day) ? rainNote(ctx, day) : deepStep(ctx, day, maturing, deepStart));
     }
   }
 
   for (const day of deepWateringDays(maturingFrom, stopDay, program.maturingWateringsPerWeek)) {
-    steps.push(rained(day) ? rainNote(ctx, day) : deepStep(ctx, day, maturing, deepStart));
+    steps.push(rained(ctx, day) ? rainNote(ctx, day) : deepStep(ctx, day, maturing, deepStart));
   }
   steps.push(...wateringNotes(ctx));
   return steps;
