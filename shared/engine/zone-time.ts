@@ -135,20 +135,30 @@ export interface ZoneClock {
   nearestReal(dayNumber: number, minuteOfDay: number): number;
 }
 
+/*
+ * A class rather than closures: one is made per plan, and under tsx (keepNames) every named
+ * closure costs an Object.defineProperty when it is created.
+ */
+class GapClock implements ZoneClock {
+  readonly gapFree: boolean;
+  constructor(private readonly gaps: readonly Gap[]) {
+    this.gapFree = gaps.length === 0;
+  }
+
+  isReal(dayNumber: number, minuteOfDay: number): boolean {
+    return this.gapFree || isOutsideGaps(this.gaps, dayNumber * MINUTES_PER_DAY + minuteOfDay);
+  }
+
+  nearestReal(dayNumber: number, minuteOfDay: number): number {
+    if (this.isReal(dayNumber, minuteOfDay)) return minuteOfDay;
+    // Controllers run a start skipped by the clock change as soon as the clock allows.
+    for (let m = minuteOfDay + 15; m < MINUTES_PER_DAY; m += 15) if (this.isReal(dayNumber, m)) return m;
+    return minuteOfDay;
+  }
+}
+
 export function zoneClock(zone: string, fromDay: number, toDay: number): ZoneClock {
-  const gaps = gapsBetween(zone, fromDay, toDay);
-  const isReal = (dayNumber: number, minuteOfDay: number) =>
-    gaps.length === 0 || isOutsideGaps(gaps, dayNumber * MINUTES_PER_DAY + minuteOfDay);
-  return {
-    gapFree: gaps.length === 0,
-    isReal,
-    nearestReal(dayNumber, minuteOfDay) {
-      if (isReal(dayNumber, minuteOfDay)) return minuteOfDay;
-      // Controllers run a start skipped by the clock change as soon as the clock allows.
-      for (let m = minuteOfDay + 15; m < MINUTES_PER_DAY; m += 15) if (isReal(dayNumber, m)) return m;
-      return minuteOfDay;
-    },
-  };
+  return new GapClock(gapsBetween(zone, fromDay, toDay));
 }
 
 function isRealLocalMinute(zone: string, dayNumber: number, minuteOfDay: number): boolean {

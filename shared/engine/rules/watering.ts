@@ -223,6 +223,11 @@ function rained(ctx: PlanContext, day: number): boolean {
   return ctx.rainDays.has(ctx.visitDay + day);
 }
 
+/** The day's step, or the rain note in its place. */
+function push(steps: PlanStep[], ctx: PlanContext, day: number, make: () => PlanStep): void {
+  steps.push(rained(ctx, day) ? rainNote(ctx, day) : make());
+}
+
 /** Deep-watering days from `from` to `to` inclusive, `perWeek` of them in each 7-day block. */
 function deepWateringDays(from: number, to: number, perWeek: number): number[] {
   const offsets = DEEP_WATERING_DAY_OFFSETS[perWeek] ?? [0];
@@ -240,9 +245,6 @@ export function wateringSteps(ctx: PlanContext): PlanStep[] {
   // cycles: those are not cut, because the frost warning already flags that
   // timing as a risk and seed left dry dies at once.
   const stopDay = ctx.frostDay !== null ? Math.min(ctx.frostDay - 1, timeline.planEnd) : timeline.planEnd;
-  const push = (day: number, make: () => PlanStep) => {
-    steps.push(rained(ctx, day) ? rainNote(ctx, day) : make());
-  };
   const deepStart = parseStarts([program.deepWateringTime]);
   const maturing = deepWatering(ctx, program.maturingWateringsPerWeek);
   let maturingFrom = timeline.establishmentEnd + 1;
@@ -252,7 +254,7 @@ export function wateringSteps(ctx: PlanContext): PlanStep[] {
     const starts = parseStarts(
       program.germinationWateringTimes ?? GERMINATION_TIMES_BY_CYCLES[program.wateringCyclesPerDayGermination] ?? [],
     );
-    push(0, () => {
+    push(steps, ctx, 0, () => {
       const date = ctx.dateOf(0);
       const byHand = ctx.input.property.irrigation.kind === "none";
       return {
@@ -289,7 +291,7 @@ export function wateringSteps(ctx: PlanContext): PlanStep[] {
     }
     const establishment = deepWatering(ctx, program.establishmentWateringsPerWeek);
     for (const day of deepWateringDays(deepFrom, establishmentLast, program.establishmentWateringsPerWeek)) {
-      push(day, () =>
+      push(steps, ctx, day, () =>
         deepStep(ctx, day, establishment, deepStart, day === deepFrom && ctx.input.property.irrigation.kind !== "none"
           ? `Switch to deep watering: ${establishment.minutes} minutes ${wherePhrase(ctx)} today`
           : undefined),
@@ -300,7 +302,7 @@ export function wateringSteps(ctx: PlanContext): PlanStep[] {
   } else {
     const feeding = ctx.services.has("fertiliser_only") || ctx.services.has("starter_fertiliser");
     const amount = ctx.input.property.irrigation.kind === "none" ? "" : `, ${maturing.minutes} minutes ${wherePhrase(ctx)}`;
-    push(0, () =>
+    push(steps, ctx, 0, () =>
       deepStep(ctx, 0, maturing, deepStart, `${feeding ? "Water the fertilizer in today" : "Water the lawn deeply today"}${amount}`),
     );
     for (const day of deepWateringDays(3, Math.min(timeline.establishmentEnd, stopDay), program.maturingWateringsPerWeek)) {
