@@ -109,6 +109,10 @@ function gapsInYear(zone: string, year: number): readonly Gap[] {
   return gaps;
 }
 
+/** Local days (around 1 January of the year) a year's scan can find gaps in, with a day's margin each side. */
+const YEAR_SCAN_FIRST_DAY = 4;
+const YEAR_SCAN_LAST_DAY = 54 * 7 + 4;
+
 /** Gaps that touch local days `fromDay`..`toDay` (day numbers, inclusive). */
 function gapsBetween(zone: string, fromDay: number, toDay: number): Gap[] {
   const firstMinute = fromDay * MINUTES_PER_DAY;
@@ -116,6 +120,11 @@ function gapsBetween(zone: string, fromDay: number, toDay: number): Gap[] {
   const out: Gap[] = [];
   // A gap can sit in the neighbouring year only around New Year's midnight.
   for (let y = civilFromDays(fromDay).year - 1; y <= civilFromDays(toDay).year + 1; y++) {
+    // gapsInYear(y) samples from 2 days before 1 January for 54 weeks, and offsets are under a
+    // day: its gaps all lie within these local days. A year that cannot reach the plan's days is
+    // skipped rather than asked of Intl (same answer, fewer Intl calls on a cold start).
+    const newYear = daysFromCivil(y, 1, 1);
+    if (newYear + YEAR_SCAN_LAST_DAY < fromDay || newYear - YEAR_SCAN_FIRST_DAY > toDay) continue;
     for (const gap of gapsInYear(zone, y)) if (gap.end > firstMinute && gap.start < lastMinute) out.push(gap);
   }
   return out;
