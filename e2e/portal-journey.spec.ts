@@ -61,7 +61,7 @@ test.beforeEach(async ({ context, page }) => {
 test("today's steps for the seeded visit: tick one off, undo, skip with a reason, and read why", async ({ page }) => {
   const step = todaysSteps(page).getByRole("article").first();
   await expect(step.getByRole("heading")).toHaveText(/^Water \d+ times today: \d+ (am|pm).* — \d+ minutes? per zone$/);
-  await expect(page.getByRole("region", { name: "Hold off on" })).toContainText(/No weed killer until \d+ \w{3}/);
+  await expect(page.getByRole("region", { name: "Hold off on" })).toContainText(/No weed killer until \w{3} \d+/);
   await expectNoSeriousA11yViolations(page);
   await reopenStep(step);
 
@@ -83,8 +83,16 @@ test("today's steps for the seeded visit: tick one off, undo, skip with a reason
   await step.getByRole("button", { name: "Undo" }).click();
   await expect(step.getByRole("button", { name: "Done" })).toBeVisible();
 
+  // The reason first, in plain words; its source one more step away, under "Sources", by keyboard too.
   await step.getByText("Why?").click();
+  await expect(step.getByText("New seed dies if it dries out")).toBeVisible();
+  await expect(step.getByText("Source:")).toBeHidden();
+  await step.locator("summary", { hasText: "Sources" }).focus();
+  await page.keyboard.press("Enter");
   await expect(step.getByText("Source:")).toBeVisible();
+  await expect(step.getByText("(published guidance)")).toBeVisible();
+  await page.keyboard.press("Enter");
+  await expect(step.getByText("Source:")).toBeHidden();
 });
 
 test("a step ticked off while the server fails goes back, with the reason in place", async ({ page }) => {
@@ -107,6 +115,17 @@ test("the plan shows every phase day by day, marks today, and prints without the
   await expect(page.locator('[aria-current="date"]')).toContainText("Today");
   await expect(page.getByRole("button", { name: "Print" })).toBeVisible();
   await expectNoSeriousA11yViolations(page);
+
+  // A photo check-in's timing rests on emergence days still marked "from memory": never cited to the homeowner.
+  const photoStep = page
+    .locator("div", { has: page.getByText("Send us a photo of the lawn", { exact: true }) })
+    .filter({ has: page.locator("summary", { hasText: "Why?" }) })
+    .last();
+  await photoStep.locator("summary", { hasText: "Why?" }).click();
+  await photoStep.locator("summary", { hasText: "Sources" }).click();
+  await expect(photoStep.getByText("Based on common lawn-care practice. We are still checking it against a published guide.")).toBeVisible();
+  await expect(photoStep.getByText("Source:")).toHaveCount(0);
+  await expect(photoStep.getByText(/land-grant/)).toHaveCount(0);
 
   await page.emulateMedia({ media: "print" });
   await expect(page.getByRole("navigation", { name: "Places" })).toBeHidden();

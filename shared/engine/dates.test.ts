@@ -1,6 +1,6 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { addDays, daysBetween, fromDayNumber, isValidIsoDate, toDayNumber } from "./dates.ts";
+import { addDays, daysBetween, fromDayNumber, isValidIsoDate, localTimeFromMinutes, minutesOfLocalTime, toDayNumber } from "./dates.ts";
 
 describe("calendar-date arithmetic", () => {
   it("agrees with Date.UTC's day count for any day from 1900 to 2200 (independent implementation)", () => {
@@ -25,6 +25,28 @@ describe("calendar-date arithmetic", () => {
     expect(addDays("2100-02-28", 1)).toBe("2100-03-01");
     expect(isValidIsoDate("2000-02-29")).toBe(true);
     expect(isValidIsoDate("2100-02-29")).toBe(false);
+  });
+
+  it("parses exactly the texts the YYYY-MM-DD pattern accepts (independent check with the regex)", () => {
+    const pattern = /^(\d{4})-(\d{2})-(\d{2})$/;
+    const texts = ["2026-09-10", "2026-9-10", "2026-09-1a", "２０２６-09-10", "2026/09/10", "2026-09-10 ", "2026-02-29", "2028-02-29", "-026-09-10", "2026-13-01", "2026-00-10", "a026-09-10"];
+    for (const text of texts) {
+      const match = pattern.exec(text);
+      const valid = match !== null && isValidIsoDate(text);
+      if (valid) expect(toDayNumber(text)).toBe(Math.round(Date.UTC(Number(match[1]), Number(match[2]) - 1, Number(match[3])) / 86_400_000));
+      else expect(() => toDayNumber(text)).toThrow(RangeError);
+    }
+  });
+
+  it("reads exactly the HH:MM texts the local-time pattern accepts (independent check with the regex)", () => {
+    const pattern = /^([01]\d|2[0-3]):([0-5]\d)$/;
+    const texts = ["00:00", "06:00", "23:59", "24:00", "19:60", "9:00", "09:0", "09-00", "0a:00", "09:00 ", "２3:00", "12:5x"];
+    for (let minute = 0; minute < 1440; minute += 7) texts.push(localTimeFromMinutes(minute));
+    for (const text of texts) {
+      const match = pattern.exec(text);
+      if (match) expect(minutesOfLocalTime(text)).toBe(Number(match[1]) * 60 + Number(match[2]));
+      else expect(() => minutesOfLocalTime(text)).toThrow(RangeError);
+    }
   });
 
   it("rejects malformed and impossible dates", () => {

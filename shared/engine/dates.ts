@@ -17,7 +17,7 @@ export function isLeapYear(year: number): boolean {
 
 export function daysInMonth(year: number, month: number): number {
   if (month === 2) return isLeapYear(year) ? 29 : 28;
-  return [4, 6, 9, 11].includes(month) ? 30 : 31;
+  return month === 4 || month === 6 || month === 9 || month === 11 ? 30 : 31;
 }
 
 export function isValidIsoDate(value: unknown): value is IsoDate {
@@ -52,32 +52,65 @@ export function civilFromDays(dayNumber: number): { year: number; month: number;
   return { year: yearOfEra + era * 400 + (month <= 2 ? 1 : 0), month, day };
 }
 
+/*
+ * Parsing by character codes, not the ISO_DATE regex: this runs for every date
+ * of every plan. Same acceptance as the regex: exactly "dddd-dd-dd", ASCII digits.
+ */
+const DIGIT_0 = 48;
+const DASH = 45;
+
+/** Digits of "dddd-dd-dd" as one number yyyymmdd (ordered as the text is), or -1 for anything else. */
+export function isoDigits(text: string): number {
+  if (text.length !== 10 || text.charCodeAt(4) !== DASH || text.charCodeAt(7) !== DASH) return -1;
+  let value = 0;
+  for (let i = 0; i < 10; i++) {
+    if (i === 4 || i === 7) continue;
+    const digit = text.charCodeAt(i) - DIGIT_0;
+    if (digit < 0 || digit > 9) return -1;
+    value = value * 10 + digit;
+  }
+  return value;
+}
+
 /** Throws on malformed input: callers pass dates that zod has already checked. */
 export function toDayNumber(date: IsoDate): number {
-  const match = ISO_DATE.exec(date);
-  const year = Number(match?.[1]);
-  const month = Number(match?.[2]);
-  const day = Number(match?.[3]);
-  if (!match || month < 1 || month > 12 || day < 1 || day > daysInMonth(year, month)) {
-    throw new RangeError(`Not a calendar date: ${date}`);
+  const digits = isoDigits(date);
+  if (digits >= 0) {
+    const year = Math.floor(digits / 10_000);
+    const month = Math.floor(digits / 100) % 100;
+    const day = digits % 100;
+    if (month >= 1 && month <= 12 && day >= 1 && day <= daysInMonth(year, month)) return daysFromCivil(year, month, day);
   }
-  return daysFromCivil(year, month, day);
+  throw new RangeError(`Not a calendar date: ${date}`);
 }
 
 const pad2 = (n: number) => (n < 10 ? `0${n}` : String(n));
 
 /*
  * Plans reuse the same few thousand dates, so their texts are memoised
- * (bounded; pure, since a day number always names the same date).
+ * (pure, since a day number always names the same date). Days of 2000–2099
+ * sit in an array indexed by day number (cheaper than a Map lookup); others
+ * in a bounded Map.
  */
+const FIRST_ARRAY_DAY = 10_957; // 2000-01-01
+const ARRAY_DAYS = 36_525; // through 2099-12-31
+const isoTextByArrayDay: (IsoDate | undefined)[] = new Array<IsoDate | undefined>(ARRAY_DAYS);
 const isoTextByDay = new Map<number, IsoDate>();
 const MAX_MEMOISED_DATES = 100_000;
 
+function isoText(dayNumber: number): IsoDate {
+  const { year, month, day } = civilFromDays(dayNumber);
+  return `${String(year).padStart(4, "0")}-${pad2(month)}-${pad2(day)}`;
+}
+
 export function fromDayNumber(dayNumber: number): IsoDate {
+  const index = dayNumber - FIRST_ARRAY_DAY;
+  if (index >= 0 && index < ARRAY_DAYS && Number.isInteger(index)) {
+    return isoTextByArrayDay[index] ?? (isoTextByArrayDay[index] = isoText(dayNumber));
+  }
   let text = isoTextByDay.get(dayNumber);
   if (text === undefined) {
-    const { year, month, day } = civilFromDays(dayNumber);
-    text = `${String(year).padStart(4, "0")}-${pad2(month)}-${pad2(day)}`;
+    text = isoText(dayNumber);
     if (isoTextByDay.size < MAX_MEMOISED_DATES) isoTextByDay.set(dayNumber, text);
   }
   return text;
@@ -100,10 +133,18 @@ export function isValidLocalTime(value: unknown): value is string {
   return typeof value === "string" && LOCAL_TIME.test(value);
 }
 
+/** Throws unless `time` is "HH:MM" (00:00–23:59), as LOCAL_TIME accepts; parsed by character codes, once per start time per plan. */
 export function minutesOfLocalTime(time: string): number {
-  const match = LOCAL_TIME.exec(time);
-  if (!match) throw new RangeError(`Not a local time: ${time}`);
-  return Number(match[1]) * 60 + Number(match[2]);
+  if (time.length === 5 && time.charCodeAt(2) === 58) {
+    const h1 = time.charCodeAt(0) - DIGIT_0;
+    const h2 = time.charCodeAt(1) - DIGIT_0;
+    const m1 = time.charCodeAt(3) - DIGIT_0;
+    const m2 = time.charCodeAt(4) - DIGIT_0;
+    const digits = h1 >= 0 && h1 <= 9 && h2 >= 0 && h2 <= 9 && m1 >= 0 && m1 <= 5 && m2 >= 0 && m2 <= 9;
+    const hour = h1 * 10 + h2;
+    if (digits && hour <= 23) return hour * 60 + m1 * 10 + m2;
+  }
+  throw new RangeError(`Not a local time: ${time}`);
 }
 
 export function localTimeFromMinutes(minutes: number): string {

@@ -10,8 +10,25 @@ export function formatInches(value: number): string {
   return text;
 }
 
+/*
+ * Plans print the same few amounts again and again (depths, rates, areas), so
+ * texts are memoised per number of decimals (bounded, pure).
+ */
+const MAX_MEMOISED_NUMBERS = 4096;
+const numberText: Map<number, string>[] = [];
+
 /** "21.4", "6,000": fixed US-style grouping so output never depends on the host's locale. */
 export function formatNumber(value: number, decimals = 1): string {
+  const memo = numberText[decimals] ?? (Number.isInteger(decimals) && decimals >= 0 && decimals <= 20 ? (numberText[decimals] = new Map()) : undefined);
+  let text = memo?.get(value);
+  if (text === undefined) {
+    text = groupedNumber(value, decimals);
+    if (memo && memo.size < MAX_MEMOISED_NUMBERS) memo.set(value, text);
+  }
+  return text;
+}
+
+function groupedNumber(value: number, decimals: number): string {
   const text = String(Number(value.toFixed(decimals)));
   const dot = text.indexOf(".");
   const whole = dot === -1 ? text : text.slice(0, dot);

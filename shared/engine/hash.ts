@@ -34,6 +34,28 @@ function hashString(s: string, tag: number): void {
   lane2 = fmix(b ^ tag);
 }
 
+/*
+ * Inputs use the same few dozen member names over and over, so each name's
+ * share of the sum (its hash times the lane constant) is worked out once and
+ * kept. Bounded: names beyond the table are simply hashed every time.
+ */
+const MAX_CACHED_KEYS = 1024;
+const keySlots = new Map<string, number>();
+const keyMix1 = new Int32Array(MAX_CACHED_KEYS + 1);
+const keyMix2 = new Int32Array(MAX_CACHED_KEYS + 1);
+
+/** Where the key's mixed hash sits in keyMix1/keyMix2; the last slot is scratch for uncached keys. */
+function keySlot(key: string): number {
+  const cached = keySlots.get(key);
+  if (cached !== undefined) return cached;
+  hashString(key, 0x6b);
+  const slot = keySlots.size < MAX_CACHED_KEYS ? keySlots.size : MAX_CACHED_KEYS;
+  keyMix1[slot] = Math.imul(lane1, 0x9e3779b1);
+  keyMix2[slot] = Math.imul(lane2, 0x85ebca6b);
+  if (slot < MAX_CACHED_KEYS) keySlots.set(key, slot);
+  return slot;
+}
+
 function hashValue(v: unknown): void {
   if (v === null || v === undefined) {
     lane1 = 0x6e756c6c;
@@ -76,9 +98,9 @@ function hashValue(v: unknown): void {
         hashValue(item);
         const value1 = lane1;
         const value2 = lane2;
-        hashString(key, 0x6b);
-        sum1 = (sum1 + fmix(value1 ^ Math.imul(lane1, 0x9e3779b1))) >>> 0;
-        sum2 = (sum2 + fmix(value2 ^ Math.imul(lane2, 0x85ebca6b))) >>> 0;
+        const slot = keySlot(key);
+        sum1 = (sum1 + fmix(value1 ^ (keyMix1[slot] as number))) >>> 0;
+        sum2 = (sum2 + fmix(value2 ^ (keyMix2[slot] as number))) >>> 0;
       }
       lane1 = fmix(sum1);
       lane2 = fmix(sum2 ^ 0x2f);

@@ -109,6 +109,10 @@ function gapsInYear(zone: string, year: number): readonly Gap[] {
   return gaps;
 }
 
+/** Local days (around 1 January of the year) a year's scan can find gaps in, with a day's margin each side. */
+const YEAR_SCAN_FIRST_DAY = 4;
+const YEAR_SCAN_LAST_DAY = 54 * 7 + 4;
+
 /** Gaps that touch local days `fromDay`..`toDay` (day numbers, inclusive). */
 function gapsBetween(zone: string, fromDay: number, toDay: number): Gap[] {
   const firstMinute = fromDay * MINUTES_PER_DAY;
@@ -116,6 +120,11 @@ function gapsBetween(zone: string, fromDay: number, toDay: number): Gap[] {
   const out: Gap[] = [];
   // A gap can sit in the neighbouring year only around New Year's midnight.
   for (let y = civilFromDays(fromDay).year - 1; y <= civilFromDays(toDay).year + 1; y++) {
+    // gapsInYear(y) samples from 2 days before 1 January for 54 weeks, and offsets are under a
+    // day: its gaps all lie within these local days. A year that cannot reach the plan's days is
+    // skipped rather than asked of Intl (same answer, fewer Intl calls on a cold start).
+    const newYear = daysFromCivil(y, 1, 1);
+    if (newYear + YEAR_SCAN_LAST_DAY < fromDay || newYear - YEAR_SCAN_FIRST_DAY > toDay) continue;
     for (const gap of gapsInYear(zone, y)) if (gap.end > firstMinute && gap.start < lastMinute) out.push(gap);
   }
   return out;
@@ -128,24 +137,37 @@ const isOutsideGaps = (gaps: readonly Gap[], wanted: number) => {
 
 /** Clock questions for one plan's date range, answered without Intl after set-up. */
 export interface ZoneClock {
+  /** No wall-clock minute is skipped anywhere in the plan's days: every time is real as given. */
+  readonly gapFree: boolean;
   isReal(dayNumber: number, minuteOfDay: number): boolean;
   /** The minute if real, else the first real quarter-hour after it that day. */
   nearestReal(dayNumber: number, minuteOfDay: number): number;
 }
 
+/*
+ * A class rather than closures: one is made per plan, and under tsx (keepNames) every named
+ * closure costs an Object.defineProperty when it is created.
+ */
+class GapClock implements ZoneClock {
+  readonly gapFree: boolean;
+  constructor(private readonly gaps: readonly Gap[]) {
+    this.gapFree = gaps.length === 0;
+  }
+
+  isReal(dayNumber: number, minuteOfDay: number): boolean {
+    return this.gapFree || isOutsideGaps(this.gaps, dayNumber * MINUTES_PER_DAY + minuteOfDay);
+  }
+
+  nearestReal(dayNumber: number, minuteOfDay: number): number {
+    if (this.isReal(dayNumber, minuteOfDay)) return minuteOfDay;
+    // Controllers run a start skipped by the clock change as soon as the clock allows.
+    for (let m = minuteOfDay + 15; m < MINUTES_PER_DAY; m += 15) if (this.isReal(dayNumber, m)) return m;
+    return minuteOfDay;
+  }
+}
+
 export function zoneClock(zone: string, fromDay: number, toDay: number): ZoneClock {
-  const gaps = gapsBetween(zone, fromDay, toDay);
-  const isReal = (dayNumber: number, minuteOfDay: number) =>
-    gaps.length === 0 || isOutsideGaps(gaps, dayNumber * MINUTES_PER_DAY + minuteOfDay);
-  return {
-    isReal,
-    nearestReal(dayNumber, minuteOfDay) {
-      if (isReal(dayNumber, minuteOfDay)) return minuteOfDay;
-      // Controllers run a start skipped by the clock change as soon as the clock allows.
-      for (let m = minuteOfDay + 15; m < MINUTES_PER_DAY; m += 15) if (isReal(dayNumber, m)) return m;
-      return minuteOfDay;
-    },
-  };
+  return new GapClock(gapsBetween(zone, fromDay, toDay));
 }
 
 function isRealLocalMinute(zone: string, dayNumber: number, minuteOfDay: number): boolean {

@@ -51,6 +51,15 @@ const yearOf = (date: string) => Number(date.slice(0, 4));
  * and each hold-off window as a multi-day all-day event. UIDs come from the steps' stable
  * keys, so a recomputed plan updates events in place instead of duplicating them.
  */
+/*
+ * The reason, then where it comes from. A value still marked "from memory" was recalled, not
+ * re-read, so it is never cited to a homeowner (the portal's "Why?" does the same).
+ */
+function holdOffDescription(holdOff: StoredHoldOff): string {
+  const basis = holdOff.provenance === "from memory" ? "Based on common lawn-care practice." : `Source: ${holdOff.source}.`;
+  return `${holdOff.why}\n\n${basis} Always read and follow the product label.`;
+}
+
 export function buildFeed(input: FeedInput): string {
   const holdOffs = input.plans.flatMap((plan) =>
     plan.holdOffs.flatMap((raw) => {
@@ -103,7 +112,7 @@ export function buildFeed(input: FeedInput): string {
     calendar.createEvent({
       id: `${plan.planId}.hold-off.${holdOff.kind}.${holdOff.start}@sproutline`,
       summary: holdOffTitle(holdOff.kind),
-      description: `${holdOff.why}\n\nSource: ${holdOff.source}. Always read and follow the product label.`,
+      description: holdOffDescription(holdOff),
       location: plan.street,
       allDay: true,
       start: holdOff.start,

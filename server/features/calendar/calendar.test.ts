@@ -44,7 +44,10 @@ beforeAll(async () => {
       { key: "feed-1", date: "2026-10-25", kind: "feed", title: "Feed with starter fertiliser", state: "skipped" },
       { key: "check-in-1", date: "2026-10-10", kind: "check_in_photo", title: "Send a check-in photo", state: "done" },
     ],
-    holdOffs: [{ kind: "weed_and_feed", start: "2026-09-15", end: "2026-11-15" }],
+    holdOffs: [
+      { kind: "weed_and_feed", start: "2026-09-15", end: "2026-11-15" },
+      { kind: "crabgrass_pre_emergent", start: "2026-09-15", end: "2026-12-01", source: "Label intervals recalled, not re-read", provenance: "from memory" },
+    ],
   }));
   ({ planId: otherPlanId } = await createPlanFixture(ctx.db, {
     customerRef: "C-1002",
@@ -90,8 +93,8 @@ describe("the feed", () => {
     expect(calendar.getFirstPropertyValue("x-wr-calname")).toContain("Cobblefield Turf Care");
 
     const ours = events.filter((e) => e.uid.startsWith(`${planId}.`));
-    // 2 + 1 watering starts, first mowing, check-in (done still shows), hold-off; the skipped feed is left out.
-    expect(ours).toHaveLength(6);
+    // 2 + 1 watering starts, first mowing, check-in (done still shows), two hold-offs; the skipped feed is left out.
+    expect(ours).toHaveLength(7);
     expect(ours.some((e) => e.summary.includes("starter"))).toBe(false);
     expect(events.some((e) => e.uid.startsWith(`${otherPlanId}.`))).toBe(false);
 
@@ -110,11 +113,18 @@ describe("the feed", () => {
     expect(mow.startDate.toString()).toBe("2026-10-20");
     expect(mow.endDate.toString()).toBe("2026-10-21");
 
-    const holdOff = ours.find((e) => e.uid.includes("hold-off"))!;
+    const holdOff = ours.find((e) => e.uid.includes("hold-off.weed_and_feed"))!;
     expect(holdOff.summary).toBe("No weed-and-feed");
     expect(holdOff.startDate.toString()).toBe("2026-09-15");
     // DTEND of an all-day event is exclusive: the last held-off day is 15 November.
     expect(holdOff.endDate.toString()).toBe("2026-11-16");
+    expect(holdOff.description).toContain("Source: test fixture.");
+
+    // A value still recalled from memory is never cited to the homeowner.
+    const recalled = ours.find((e) => e.uid.includes("hold-off.crabgrass_pre_emergent"))!;
+    expect(recalled.description).toContain("Based on common lawn-care practice.");
+    expect(recalled.description).not.toContain("recalled");
+    expect(recalled.description).not.toContain("Source:");
   });
 
   it("unknown and malformed tokens → 404", async () => {

@@ -68,12 +68,14 @@ const HOMEOWNER: Partial<Record<string, (ctx: PlanContext, finding: WarningFindi
 
 /** The plan's warnings: every finding for the crew, then the homeowner versions (sources kept). */
 export function warningsForAudiences(ctx: PlanContext, findings: readonly WarningFinding[]): PlanWarning[] {
-  const crew = findings.map((f): PlanWarning => ({ ...f, audience: "crew" }));
-  const homeowner = findings.flatMap((f): PlanWarning[] => {
+  // One list, crew versions first: runs for every plan, so no intermediate arrays.
+  const out: PlanWarning[] = [];
+  for (const f of findings) out.push({ ...f, audience: "crew" });
+  for (const f of findings) {
     const wording = HOMEOWNER[f.code]?.(ctx, f);
-    return wording ? [{ code: f.code, ...wording, source: f.source, provenance: f.provenance, audience: "homeowner" }] : [];
-  });
-  return [...crew, ...homeowner];
+    if (wording) out.push({ code: f.code, ...wording, source: f.source, provenance: f.provenance, audience: "homeowner" });
+  }
+  return out;
 }
 
 /** What a homeowner is shown. Warnings stored before audiences existed count as crew-only. */

@@ -62,12 +62,23 @@ interface StartTime {
   readonly minute: number;
 }
 
-const parseStarts = (times: readonly string[]): StartTime[] => times.map((text) => ({ text, minute: minutesOfLocalTime(text) }));
+/** Start times parsed once per plan, with their distinct texts (what a day without a clock change gets). */
+interface Starts {
+  readonly list: readonly StartTime[];
+  readonly texts: readonly string[];
+}
+
+const parseStarts = (times: readonly string[]): Starts => ({
+  list: times.map((text) => ({ text, minute: minutesOfLocalTime(text) })),
+  texts: times.filter((text, i) => times.indexOf(text) === i),
+});
 
 /** Wall-clock starts that really occur that day (a 02:30 start moves past a spring-forward gap). */
-function realTimes(ctx: PlanContext, day: number, starts: readonly StartTime[]): string[] {
+function realTimes(ctx: PlanContext, day: number, starts: Starts): string[] {
+  // Most plans see no spring-forward gap at all: every start is real as written.
+  if (ctx.clock.gapFree) return starts.texts.slice();
   const out: string[] = [];
-  for (const start of starts) {
+  for (const start of starts.list) {
     const real = ctx.clock.nearestReal(ctx.visitDay + day, start.minute);
     const text = real === start.minute ? start.text : localTimeFromMinutes(real);
     if (!out.includes(text)) out.push(text);
@@ -89,24 +100,40 @@ function rainNote(ctx: PlanContext, day: number): PlanStep {
   };
 }
 
-function germinationStep(ctx: PlanContext, day: number, minutes: number, starts: readonly StartTime[]): PlanStep {
-  const date = ctx.dateOf(day);
+/** Light watering's texts for a day with these start times. */
+function germinationTexts(ctx: PlanContext, minutes: number, realStarts: readonly string[]): { title: string; detail: string } {
   const byHand = ctx.input.property.irrigation.kind === "none";
-  const realStarts = realTimes(ctx, day, starts);
   const cycles = realStarts.length;
   return {
-    key: dailyKey("water", date, 1),
-    date,
-    phase: ctx.phaseOf(day),
-    kind: "water",
     title: byHand
       ? `Water the seeded areas lightly ${cycles} times today`
       : `Water ${cycles} times today, ${minutes} minutes ${wherePhrase(ctx)}`,
     detail:
       `Start at about ${realStarts.join(", ")}. Keep the seed and the top half inch of soil damp, not soaked; stop if water puddles or runs off.` +
       (byHand ? " Use a hose with a gentle spray until the surface is evenly damp." : zonesSentence(ctx, minutes)),
+  };
+}
+
+/** The germination days' light watering; a day without a clock change gets texts composed once per plan. */
+interface LightWatering {
+  readonly minutes: number;
+  readonly starts: Starts;
+  readonly usual: { readonly title: string; readonly detail: string };
+}
+
+function germinationStep(ctx: PlanContext, day: number, light: LightWatering): PlanStep {
+  const date = ctx.dateOf(day);
+  const realStarts = realTimes(ctx, day, light.starts);
+  const texts = ctx.clock.gapFree ? light.usual : germinationTexts(ctx, light.minutes, realStarts);
+  return {
+    key: dailyKey("water", date, 1),
+    date,
+    phase: ctx.phaseOf(day),
+    kind: "water",
+    title: texts.title,
+    detail: texts.detail,
     times: realStarts,
-    minutesPerCycle: minutes,
+    minutesPerCycle: light.minutes,
     why: germinationWhy,
     cautions: WATER_CAUTIONS,
   };
@@ -132,34 +159,42 @@ interface DeepWatering {
   readonly depthText: string;
   /** How to water it: by hose, or how long each zone runs. */
   readonly howText: string;
+  /** A deep watering's usual title and detail, and a taper watering's amount (": 12 minutes per zone") and detail. */
+  readonly title: string;
+  readonly detail: string;
+  readonly taperAmount: string;
+  readonly taperDetail: string;
 }
 
 function deepWatering(ctx: PlanContext, perWeek: number): DeepWatering {
   const depthIn = depthPerWatering(ctx, perWeek);
   const minutes = wholeMinutes(depthIn, ctx.precipitationRate);
   const byHand = ctx.input.property.irrigation.kind === "none";
+  const depthText = formatNumber(depthIn, 2);
+  const howText = byHand ? " A hose-end sprinkler moved around the lawn does this more evenly than hand watering." : zonesSentence(ctx, minutes);
   return {
     depthIn,
     minutes,
-    depthText: formatNumber(depthIn, 2),
-    howText: byHand ? " A hose-end sprinkler moved around the lawn does this more evenly than hand watering." : zonesSentence(ctx, minutes),
+    depthText,
+    howText,
+    title: byHand ? "Water deeply today" : `Water deeply today, ${minutes} minutes ${wherePhrase(ctx)}`,
+    detail: `Put down about ${depthText} inch of water, early in the morning: about ${WEEKLY_WATER_NEED.inches} inch a week in all, rain included. Skip it if it rained that much since the last watering.${howText}`,
+    taperAmount: byHand ? "" : `: ${minutes} minutes ${wherePhrase(ctx)}`,
+    taperDetail: `Put down about ${depthText} inch, early in the morning, so the soil stays damp below the surface between waterings. Skip it if it rained that much since the last watering.${howText}`,
   };
 }
 
-function deepStep(ctx: PlanContext, day: number, deep: DeepWatering, deepStart: readonly StartTime[], title?: string): PlanStep {
+function deepStep(ctx: PlanContext, day: number, deep: DeepWatering, deepStart: Starts, title?: string): PlanStep {
   const date = ctx.dateOf(day);
-  const byHand = ctx.input.property.irrigation.kind === "none";
-  const minutes = deep.minutes;
   return {
     key: dailyKey("water", date, 1),
     date,
     phase: ctx.phaseOf(day),
     kind: "water",
-    title: title ?? (byHand ? "Water deeply today" : `Water deeply today, ${minutes} minutes ${wherePhrase(ctx)}`),
-    detail:
-      `Put down about ${deep.depthText} inch of water, early in the morning: about ${WEEKLY_WATER_NEED.inches} inch a week in all, rain included. Skip it if it rained that much since the last watering.${deep.howText}`,
+    title: title ?? deep.title,
+    detail: deep.detail,
     times: realTimes(ctx, day, deepStart),
-    minutesPerCycle: minutes,
+    minutesPerCycle: deep.minutes,
     why: deepWhy,
     cautions: WATER_CAUTIONS,
   };
@@ -167,10 +202,9 @@ function deepStep(ctx: PlanContext, day: number, deep: DeepWatering, deepStart: 
 
 type TaperStage = "once_a_day" | "every_other_day";
 
-function taperStep(ctx: PlanContext, day: number, stage: TaperStage, first: boolean, deep: DeepWatering, deepStart: readonly StartTime[]): PlanStep {
+function taperStep(ctx: PlanContext, day: number, stage: TaperStage, first: boolean, deep: DeepWatering, deepStart: Starts): PlanStep {
   const date = ctx.dateOf(day);
-  const byHand = ctx.input.property.irrigation.kind === "none";
-  const amount = byHand ? "" : `: ${deep.minutes} minutes ${wherePhrase(ctx)}`;
+  const amount = deep.taperAmount;
   const title =
     stage === "once_a_day"
       ? first
@@ -185,13 +219,22 @@ function taperStep(ctx: PlanContext, day: number, stage: TaperStage, first: bool
     phase: ctx.phaseOf(day),
     kind: "water",
     title,
-    detail:
-      `Put down about ${deep.depthText} inch, early in the morning, so the soil stays damp below the surface between waterings. Skip it if it rained that much since the last watering.${deep.howText}`,
+    detail: deep.taperDetail,
     times: realTimes(ctx, day, deepStart),
     minutesPerCycle: deep.minutes,
     why: taperWhy,
     cautions: WATER_CAUTIONS,
   };
+}
+
+/** Heavy rain was reported for that day (a function of its own: no closure made per plan). */
+function rained(ctx: PlanContext, day: number): boolean {
+  return ctx.rainDays.has(ctx.visitDay + day);
+}
+
+/** The day's step, or the rain note in its place. */
+function push(steps: PlanStep[], ctx: PlanContext, day: number, make: () => PlanStep): void {
+  steps.push(rained(ctx, day) ? rainNote(ctx, day) : make());
 }
 
 /** Deep-watering days from `from` to `to` inclusive, `perWeek` of them in each 7-day block. */
@@ -211,9 +254,6 @@ export function wateringSteps(ctx: PlanContext): PlanStep[] {
   // cycles: those are not cut, because the frost warning already flags that
   // timing as a risk and seed left dry dies at once.
   const stopDay = ctx.frostDay !== null ? Math.min(ctx.frostDay - 1, timeline.planEnd) : timeline.planEnd;
-  const push = (day: number, make: () => PlanStep) => {
-    steps.push(ctx.rainDays.has(ctx.visitDay + day) ? rainNote(ctx, day) : make());
-  };
   const deepStart = parseStarts([program.deepWateringTime]);
   const maturing = deepWatering(ctx, program.maturingWateringsPerWeek);
   let maturingFrom = timeline.establishmentEnd + 1;
@@ -224,7 +264,7 @@ export function wateringSteps(ctx: PlanContext): PlanStep[] {
     // Seed lying dormant gets no watering until sprouts are due in spring (rules/season-advice.ts says so).
     const sowingStart = ctx.season.sowingStartDay;
     const firstLightDay = sowingStart > 0 && ctx.mix ? sowingStart + ctx.mix.fastest.emergenceDays.min : 1;
-    if (sowingStart === 0) push(0, () => {
+    if (sowingStart === 0) push(steps, ctx, 0, () => {
       const date = ctx.dateOf(0);
       const byHand = ctx.input.property.irrigation.kind === "none";
       return {
@@ -242,7 +282,9 @@ export function wateringSteps(ctx: PlanContext): PlanStep[] {
         cautions: WATER_CAUTIONS,
       };
     });
-    for (let day = firstLightDay; day <= timeline.germinationEnd; day++) push(day, () => germinationStep(ctx, day, lightMinutes, starts));
+    const light: LightWatering = { minutes: lightMinutes, starts, usual: germinationTexts(ctx, lightMinutes, starts.texts) };
+    // The busiest loops push directly rather than through `push`: no closure per day.
+    for (let day = firstLightDay; day <= timeline.germinationEnd; day++) steps.push(rained(ctx, day) ? rainNote(ctx, day) : germinationStep(ctx, day, light));
 
     // Taper after the first mowing: once a day, then every other day, then deep.
     const establishmentLast = Math.min(timeline.establishmentEnd, stopDay);
@@ -252,14 +294,14 @@ export function wateringSteps(ctx: PlanContext): PlanStep[] {
     const daily = deepWatering(ctx, 7);
     const everyOther = deepWatering(ctx, 3.5);
     for (let day = onceFrom; day < everyOtherFrom && day <= establishmentLast; day++) {
-      push(day, () => taperStep(ctx, day, "once_a_day", day === onceFrom, daily, deepStart));
+      steps.push(rained(ctx, day) ? rainNote(ctx, day) : taperStep(ctx, day, "once_a_day", day === onceFrom, daily, deepStart));
     }
     for (let day = everyOtherFrom; day < deepFrom && day <= establishmentLast; day += 2) {
-      push(day, () => taperStep(ctx, day, "every_other_day", day === everyOtherFrom, everyOther, deepStart));
+      steps.push(rained(ctx, day) ? rainNote(ctx, day) : taperStep(ctx, day, "every_other_day", day === everyOtherFrom, everyOther, deepStart));
     }
     const establishment = deepWatering(ctx, program.establishmentWateringsPerWeek);
     for (const day of deepWateringDays(deepFrom, establishmentLast, program.establishmentWateringsPerWeek)) {
-      push(day, () =>
+      push(steps, ctx, day, () =>
         deepStep(ctx, day, establishment, deepStart, day === deepFrom && ctx.input.property.irrigation.kind !== "none"
           ? `Switch to deep watering: ${establishment.minutes} minutes ${wherePhrase(ctx)} today`
           : undefined),
@@ -272,17 +314,17 @@ export function wateringSteps(ctx: PlanContext): PlanStep[] {
     const amount = ctx.input.property.irrigation.kind === "none" ? "" : `, ${maturing.minutes} minutes ${wherePhrase(ctx)}`;
     // Not once the frost has come: the lawn has stopped using water, and rain or snow does the job.
     if (stopDay >= 0) {
-      push(0, () =>
+      push(steps, ctx, 0, () =>
         deepStep(ctx, 0, maturing, deepStart, `${feeding ? "Water the fertilizer in today" : "Water the lawn deeply today"}${amount}`),
       );
     }
     for (const day of deepWateringDays(3, Math.min(timeline.establishmentEnd, stopDay), program.maturingWateringsPerWeek)) {
-      push(day, () => deepStep(ctx, day, maturing, deepStart));
+      steps.push(rained(ctx, day) ? rainNote(ctx, day) : deepStep(ctx, day, maturing, deepStart));
     }
   }
 
   for (const day of deepWateringDays(maturingFrom, stopDay, program.maturingWateringsPerWeek)) {
-    push(day, () => deepStep(ctx, day, maturing, deepStart));
+    steps.push(rained(ctx, day) ? rainNote(ctx, day) : deepStep(ctx, day, maturing, deepStart));
   }
   steps.push(...wateringNotes(ctx));
   return steps;

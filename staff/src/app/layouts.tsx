@@ -40,6 +40,7 @@ export function StaffLayout() {
     { to: "/plan-preview", label: "Plan preview" },
     // Managers edit the rules; technicians read what applies where they work.
     { to: "/places", label: "Places" },
+    { to: "/sources", label: "Sources to check" },
   ];
   if (user?.role === "manager") nav.push(...managerNav);
   if (outboxAvailable) nav.push({ to: "/outbox", label: "Outbox (development)" });

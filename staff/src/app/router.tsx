@@ -41,6 +41,10 @@ export const router = createBrowserRouter(
                 { index: true, lazy: () => import("../features/home/home-route.tsx").then((m) => ({ Component: m.HomeRoute })) },
                 { path: "outbox", lazy: () => import("../features/outbox/outbox-route.tsx").then((m) => ({ Component: m.OutboxRoute })) },
                 { path: "plan-preview", lazy: () => import("../features/plan-preview/plan-preview-route.tsx").then((m) => ({ Component: m.PlanPreviewRoute })) },
+                {
+                  path: "sources",
+                  lazy: () => import("../features/sources-to-check/sources-to-check-route.tsx").then((m) => ({ Component: m.SourcesToCheckRoute })),
+                },
                 // Technician screens (managers use them too).
                 {
                   path: "questions",

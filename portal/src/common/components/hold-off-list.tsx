@@ -11,7 +11,7 @@ export interface HoldOffListProps {
   cautions: readonly { id: string; text: string }[];
 }
 
-/** "No weed-and-feed until 24 Jan", each with its reason one tap away. */
+/** "No weed-and-feed until Jan 24", each with its reason one tap away. */
 export function HoldOffList({ holdOffs, cautions }: HoldOffListProps) {
   const { t, i18n } = useTranslation();
   return (

@@ -10,9 +10,9 @@ function utcDate(iso: IsoDate): Date {
   return new Date(Date.UTC(year, month - 1, day));
 }
 
-/** The locale that writes dates the way our homeowners read them ("3 Nov" / "3 nov"). */
+/** The locale that writes dates the way our homeowners read them: month first in American English ("Nov 3"), "3 nov" in Spanish. */
 function dateLocale(language: string): string {
-  return language.startsWith("es") ? "es-US" : "en-GB";
+  return language.startsWith("es") ? "es-US" : "en-US";
 }
 
 /**
@@ -30,17 +30,17 @@ function formatter(locale: string, options: Intl.DateTimeFormatOptions): Intl.Da
   return made;
 }
 
-/** "3 Nov" */
+/** "Nov 3" ("3 nov" in Spanish) */
 export function formatShortDate(iso: IsoDate, language: string): string {
   return formatter(dateLocale(language), { day: "numeric", month: "short", timeZone: "UTC" }).format(utcDate(iso));
 }
 
-/** "Tue 3 Nov" */
+/** "Tue, Nov 3" ("mar, 3 nov" in Spanish) */
 export function formatDayWithWeekday(iso: IsoDate, language: string): string {
   return formatter(dateLocale(language), { weekday: "short", day: "numeric", month: "short", timeZone: "UTC" }).format(utcDate(iso));
 }
 
-/** "Tuesday 3 November" */
+/** "Tuesday, November 3" ("martes, 3 de noviembre" in Spanish) */
 export function formatLongDate(iso: IsoDate, language: string): string {
   return formatter(dateLocale(language), { weekday: "long", day: "numeric", month: "long", timeZone: "UTC" }).format(utcDate(iso));
 }

@@ -14,7 +14,7 @@ export type FixtureStep = {
   state?: "pending" | "done" | "skipped";
 };
 
-export type FixtureHoldOff = { kind: string; start: string; end: string };
+export type FixtureHoldOff = { kind: string; start: string; end: string; source?: string; provenance?: "published" | "common practice" | "from memory" };
 
 export async function customerByRef(db: Db, externalRef: string) {
   const row = await db("customers")
@@ -37,8 +37,8 @@ export async function createPlanFixture(
       .insert({ property_id: owner.propertyId, visit_date: options.visitDate ?? "2026-09-15", services: ["overseeding", "aeration"], details: {} })
       .returning<{ id: number }[]>("id");
     const holdOffs = (options.holdOffs ?? []).map((h) => ({
-      ...h, why: "New seedlings are hurt by weed killers until they have been mowed a few times.",
-      source: "test fixture", provenance: "common practice", cautions: [],
+      why: "New seedlings are hurt by weed killers until they have been mowed a few times.",
+      source: "test fixture", provenance: "common practice", cautions: [], ...h,
     }));
     const [plan] = await trx("care_plans")
       .insert({ property_id: owner.propertyId, visit_id: visit!.id, program_version: 1, input: {}, hold_offs: JSON.stringify(holdOffs) })

@@ -3,7 +3,7 @@ import { Button, ErrorState, LoadingState, Notice, Page, isApiRequestError } fro
 import { outboxRefetchMs, useOutbox } from "./api/get-outbox.ts";
 import { OutboxList } from "./components/outbox-list.tsx";
 
-const clock = new Intl.DateTimeFormat(undefined, { timeStyle: "medium" });
+const clock = new Intl.DateTimeFormat("en-US", { timeStyle: "medium" });
 
 /** Development only: every SMS and e-mail the local fakes received, so a demo can follow a link. */
 export function OutboxRoute() {

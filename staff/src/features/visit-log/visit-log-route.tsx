@@ -24,7 +24,7 @@ import { VisitErrorsContext } from "./lib/field-errors.ts";
 import { defaultVisitForm, fieldId, type VisitFormValues } from "./lib/form-values.ts";
 import { checkVisitForm, type FormFieldErrors } from "./lib/to-log-visit.ts";
 
-const draftStamp = new Intl.DateTimeFormat(undefined, { dateStyle: "medium", timeStyle: "short" });
+const draftStamp = new Intl.DateTimeFormat("en-US", { dateStyle: "medium", timeStyle: "short" });
 
 /** Log a visit in the field, on a phone: what was done, seed and products with live amounts, conditions. */
 export function VisitLogRoute() {

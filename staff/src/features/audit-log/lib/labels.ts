@@ -32,5 +32,5 @@ export const subjectTypes = [
 const subjectNames: Record<string, string> = { plan: "Care plan", customer: "Customer", property: "Lawn", visit: "Visit", follow_up: "Follow-up", customers: "Import", place: "Place" };
 export const subjectName = (type: string | null) => (type ? (subjectNames[type] ?? type) : "");
 
-const when = new Intl.DateTimeFormat(undefined, { dateStyle: "medium", timeStyle: "short" });
+const when = new Intl.DateTimeFormat("en-US", { dateStyle: "medium", timeStyle: "short" });
 export const formatWhen = (iso: string) => when.format(new Date(iso));

@@ -18,11 +18,11 @@ export function formatHours(hours: number | null): string {
   return `${oneDecimal.format(hours / 24)} days`;
 }
 
-const monthFormat = new Intl.DateTimeFormat(undefined, { month: "short", year: "numeric", timeZone: "UTC" });
+const monthFormat = new Intl.DateTimeFormat("en-US", { month: "short", year: "numeric", timeZone: "UTC" });
 /** "2026-09" → "Sept 2026". */
 export const formatMonth = (month: string) => monthFormat.format(new Date(`${month}-01T00:00:00Z`));
 
-const dayFormat = new Intl.DateTimeFormat(undefined, { day: "numeric", month: "short", year: "numeric", timeZone: "UTC" });
+const dayFormat = new Intl.DateTimeFormat("en-US", { day: "numeric", month: "short", year: "numeric", timeZone: "UTC" });
 export const formatDay = (iso: string) => dayFormat.format(new Date(`${iso}T00:00:00Z`));
 
 export const reasonLabel = (reason: FollowUpReason) => followUpReasonLabels[reason];

@@ -1,7 +1,7 @@
 import { Link } from "react-router-dom";
 import type { CustomerConversation } from "#shared/schemas/customers";
 
-const stamp = new Intl.DateTimeFormat(undefined, { dateStyle: "medium", timeStyle: "short" });
+const stamp = new Intl.DateTimeFormat("en-US", { dateStyle: "medium", timeStyle: "short" });
 
 /** Each care plan's question-and-answer thread, in numbers, with a way into it. */
 export function ConversationList({ conversations, streetOfPlan }: { conversations: CustomerConversation[]; streetOfPlan: (planId: number) => string }) {

@@ -21,7 +21,7 @@ const kindLabels: Record<CustomerReminder["kind"], string> = {
   welcome: "Welcome message",
 };
 const channelLabels: Record<CustomerReminder["channel"], string> = { sms: "Text", email: "E-mail" };
-const stamp = new Intl.DateTimeFormat(undefined, { dateStyle: "medium", timeStyle: "short" });
+const stamp = new Intl.DateTimeFormat("en-US", { dateStyle: "medium", timeStyle: "short" });
 
 function StateBadge({ state }: { state: State }) {
   const { label, className } = stateLabels[state];

@@ -28,7 +28,7 @@ function ApplicationRecordDetails({ record }: { record: ApplicationRecord }) {
     ["Applicator licence no.", record.applicatorLicenceNumber],
     ["Wind", windText(record) ?? undefined],
     ["Temperature", record.temperatureF !== undefined ? `${record.temperatureF} °F` : undefined],
-    ["Applied at", record.appliedAt ? new Date(record.appliedAt).toLocaleString() : undefined],
+    ["Applied at", record.appliedAt ? new Date(record.appliedAt).toLocaleString("en-US", { dateStyle: "medium", timeStyle: "short" }) : undefined],
   ];
   return (
     <details className="mt-1">

@@ -33,9 +33,9 @@ export const statusOptions = FOLLOW_UP_STATUSES.map((value) => ({ value, label: 
 export const reasonOptions = FOLLOW_UP_REASONS.map((value) => ({ value, label: followUpReasonLabels[value] }));
 export const outcomeOptions = FOLLOW_UP_OUTCOMES.map((value) => ({ value, label: outcomeLabels[value] }));
 
-const dateFormat = new Intl.DateTimeFormat(undefined, { day: "numeric", month: "short", year: "numeric", timeZone: "UTC" });
+const dateFormat = new Intl.DateTimeFormat("en-US", { day: "numeric", month: "short", year: "numeric", timeZone: "UTC" });
 
-/** "12 Sept 2026" for an ISO date, read as a calendar day (not shifted by the browser's zone). */
+/** "Sep 12, 2026" for an ISO date, read as a calendar day (not shifted by the browser's zone). */
 export function formatDay(isoDate: string): string {
   return dateFormat.format(new Date(`${isoDate.slice(0, 10)}T00:00:00Z`));
 }

@@ -2,7 +2,7 @@ import { useId } from "react";
 import type { OutboxMessage } from "#shared/schemas/outbox";
 import { LinkifiedText, safeHttpUrl, splitLinks } from "#shared/ui/index";
 
-const timeFormat = new Intl.DateTimeFormat(undefined, { dateStyle: "medium", timeStyle: "medium" });
+const timeFormat = new Intl.DateTimeFormat("en-US", { dateStyle: "medium", timeStyle: "medium" });
 
 /** One message as the fake received it. The e-mail's HTML part is never rendered: only text and links. */
 export function OutboxMessageCard({ message }: { message: OutboxMessage }) {

@@ -19,15 +19,13 @@ function utcDate(iso: IsoDate): Date {
   return new Date(Date.UTC(year, month - 1, day));
 }
 
-/** "Thu 10 Sep" (or "Thu 10 Sep 2026" with the year). */
+/** "Thu, Sep 10" (or "Thu, Sep 10, 2026" with the year): month first, as American English writes it. */
 export function formatDay(iso: IsoDate, { withYear = false } = {}): string {
   if (!isValidIsoDate(iso)) return iso;
-  const parts = (withYear ? dayPartsWithYear : dayParts).formatToParts(utcDate(iso));
-  const part = (type: Intl.DateTimeFormatPartTypes) => parts.find((p) => p.type === type)?.value ?? "";
-  return [part("weekday"), part("day"), part("month"), withYear ? part("year") : ""].filter(Boolean).join(" ");
+  return (withYear ? dayPartsWithYear : dayParts).format(utcDate(iso));
 }
 
-/** "Thu 10 Sep – Fri 6 Nov"; one day when start and end are the same. */
+/** "Thu, Sep 10 – Fri, Nov 6"; one day when start and end are the same. */
 export function formatDayRange(start: IsoDate, end: IsoDate): string {
   return start === end ? formatDay(start) : `${formatDay(start)} – ${formatDay(end)}`;
 }

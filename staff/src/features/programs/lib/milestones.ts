@@ -23,9 +23,9 @@ export function milestonesOf(plan: SamplePlan): Milestone[] {
   ];
 }
 
-const dayFormat = new Intl.DateTimeFormat(undefined, { day: "numeric", month: "short", timeZone: "UTC" });
+const dayFormat = new Intl.DateTimeFormat("en-US", { day: "numeric", month: "short", timeZone: "UTC" });
 
-/** "24 Sept (day 14)": the date and how far it is from the visit. */
+/** "Sep 24 (day 14)": the date and how far it is from the visit. */
 export function formatMilestone(value: Milestone["value"], visitDate: string): string {
   if (value === null) return "—";
   if (typeof value === "number") return String(value);

@@ -9,8 +9,8 @@ export interface PhotoViewing {
 
 export type OpenPhoto = (viewing: PhotoViewing) => void;
 
-const stampFormat = new Intl.DateTimeFormat(undefined, { dateStyle: "medium", timeStyle: "short" });
-const dayFormat = new Intl.DateTimeFormat(undefined, { dateStyle: "medium" });
+const stampFormat = new Intl.DateTimeFormat("en-US", { dateStyle: "medium", timeStyle: "short" });
+const dayFormat = new Intl.DateTimeFormat("en-US", { dateStyle: "medium" });
 
 export const formatStamp = (iso: string) => stampFormat.format(new Date(iso));
 export const formatDay = (iso: string) => dayFormat.format(new Date(iso));

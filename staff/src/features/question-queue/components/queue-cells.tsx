@@ -3,7 +3,7 @@ import { errorMessage, useSignedInUser, waitingTime } from "#shared/ui/index";
 import { useAssignQuestion } from "../../../common/api/assign-question.ts";
 import type { QueueRow } from "../lib/queue-rows.ts";
 
-const askedFormat = new Intl.DateTimeFormat(undefined, { dateStyle: "medium", timeStyle: "short" });
+const askedFormat = new Intl.DateTimeFormat("en-US", { dateStyle: "medium", timeStyle: "short" });
 
 /** The customer's name as the link to the question: the row's one tab stop. */
 export function QuestionLink({ row }: { row: QueueRow }) {

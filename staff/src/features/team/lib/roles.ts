@@ -9,5 +9,5 @@ export const roleOptions = [
 
 export const roleHint = "Technicians answer questions and log visits; managers also see reports, programs, imports and the team.";
 
-const dateFormat = new Intl.DateTimeFormat(undefined, { day: "numeric", month: "short", year: "numeric" });
+const dateFormat = new Intl.DateTimeFormat("en-US", { day: "numeric", month: "short", year: "numeric" });
 export const formatDate = (iso: string) => dateFormat.format(new Date(iso));
