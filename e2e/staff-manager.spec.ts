@@ -67,7 +67,7 @@ test("a manager records a callback and sees the callback rate change in the repo
   await expect(dialog).toBeVisible();
   await dialog.getByLabel("Reason", { exact: true }).selectOption({ label: "No germination" });
   await dialog.getByLabel("This is a callback").check();
-  await dialog.getByLabel("Labour hours").fill("1.5");
+  await dialog.getByLabel("Labor hours").fill("1.5");
   await dialog.getByLabel("Materials cost ($)").fill("24.50");
   await dialog.getByRole("button", { name: "Save" }).click();
   await expect(dialog).toBeHidden();

@@ -10,7 +10,7 @@ export const SERVICE_LABELS: Record<Service, string> = {
   slit_seeding: "Slit seeding",
   new_seeding: "New seeding (bare soil)",
   starter_fertiliser: "Starter fertiliser",
-  fertiliser_only: "Fertiliser only",
+  fertiliser_only: "Fertilizer only",
   top_dressing: "Top dressing",
   sod_installation: "Sod installation",
 };

@@ -128,7 +128,7 @@ export function checkChange(current: FollowUp, patch: UpdateFollowUp, role: Sess
   }
   Object.assign(fields, checkWindow(next.arrivalStart, next.arrivalEnd));
   if (next.isCallback && next.status === "done" && next.labourHours === null) {
-    fields.labourHours = "Record the labour hours of this callback";
+    fields.labourHours = "Record the labor hours of this callback";
   }
   if (next.isCallback && next.status === "closed" && next.outcome === "pending") {
     fields.outcome = "Record how the callback turned out before closing it";

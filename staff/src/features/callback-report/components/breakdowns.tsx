@@ -86,7 +86,7 @@ export function ByReason({ report }: { report: CallbackReport }) {
             { header: "Reason", cell: (r) => reasonLabel(r.reason) },
             { header: "Callbacks", cell: (r) => formatCount(r.callbacks), numeric: true },
             { header: "Rate per 100", cell: (r) => formatRate(r.ratePer100), numeric: true },
-            { header: "Labour", cell: (r) => formatHours(r.labourHours), numeric: true },
+            { header: "Labor", cell: (r) => formatHours(r.labourHours), numeric: true },
             { header: "Cost", cell: (r) => formatMoney(r.totalCost), numeric: true },
           ]}
           empty="No callbacks in this range."

@@ -6,7 +6,7 @@ export function CostBreakdown({ report }: { report: CallbackReport }) {
   const { cost, labourRatePerHour } = report;
   const rows = [
     { item: "Callbacks", value: formatCount(cost.callbacks) },
-    { item: "Labour hours", value: formatHours(cost.labourHours) },
+    { item: "Labor hours", value: formatHours(cost.labourHours) },
     { item: `Labor at ${formatMoney(labourRatePerHour)} an hour`, value: formatMoney(cost.labourCost) },
     { item: "Materials", value: formatMoney(cost.materialsCost) },
     { item: "Total", value: formatMoney(cost.totalCost) },

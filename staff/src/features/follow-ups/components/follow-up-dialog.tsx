@@ -130,7 +130,7 @@ function CallbackFields({ form }: { form: ReturnType<typeof useForm<FollowUpForm
     <fieldset className="flex flex-col gap-4 rounded-lg border-2 border-loam-100 bg-canvas p-4">
       <legend className="px-1 font-heading text-lg font-bold text-loam-700">Callback cost and outcome</legend>
       <div className="grid gap-4 sm:grid-cols-2">
-        <TextField label="Labour hours" inputMode="decimal" error={errors.labourHours?.message} {...register("labourHours")} />
+        <TextField label="Labor hours" inputMode="decimal" error={errors.labourHours?.message} {...register("labourHours")} />
         <TextField label="Materials cost ($)" inputMode="decimal" error={errors.materialsCost?.message} {...register("materialsCost")} />
       </div>
       <SelectField label="Outcome" options={outcomeOptions} error={errors.outcome?.message} {...register("outcome")} />

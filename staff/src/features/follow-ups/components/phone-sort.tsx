@@ -10,7 +10,7 @@ const choices: { value: `${Sort}:${Order}`; label: string }[] = [
   { value: "status:asc", label: "Status" },
   { value: "customer:asc", label: "Customer (A–Z)" },
   { value: "technician:asc", label: "Technician (A–Z)" },
-  { value: "labourHours:desc", label: "Most labour hours first" },
+  { value: "labourHours:desc", label: "Most labor hours first" },
 ];
 
 /** Cards have no column headers to press, so phones get the common sort orders as one select. */

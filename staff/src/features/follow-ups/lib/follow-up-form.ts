@@ -49,7 +49,7 @@ export const followUpFormSchema = z
     if (needsVisit && !v.scheduledFor) ctx.addIssue({ code: "custom", path: ["scheduledFor"], message: "Give the date of the visit" });
     if (needsVisit && !v.technicianId) ctx.addIssue({ code: "custom", path: ["technicianId"], message: "Pick the technician who goes" });
     if (v.isCallback && v.status === "done" && v.labourHours === "") {
-      ctx.addIssue({ code: "custom", path: ["labourHours"], message: "Record the labour hours of this callback" });
+      ctx.addIssue({ code: "custom", path: ["labourHours"], message: "Record the labor hours of this callback" });
     }
     if (v.isCallback && v.status === "closed" && v.outcome === "pending") {
       ctx.addIssue({ code: "custom", path: ["outcome"], message: "Record how the callback turned out before closing it" });
