@@ -114,6 +114,9 @@ describe("place rules", () => {
       const { planId } = (await technician.post("/api/visits").send({ propertyId: ruthPropertyId, visit }).expect(201)).body as { planId: number };
       const stored = await ctx.db("care_plans").where({ id: planId }).first<{ input: PlanInputRaw }>("input");
       expect(stored!.input.placeRules).toMatchObject({ name: "Test place for plans", phosphorus: "needs_reason", watering: { allowedWeekdays: [1, 3, 6] } });
+      // The visit form reads the same rules with the lawn, so its live warnings match the saved plan's.
+      const lawn = (await technician.get(`/api/properties/${ruthPropertyId}`).expect(200)).body.property as { placeRules: { name: string } | null };
+      expect(lawn.placeRules?.name).toBe("Test place for plans");
 
       const plan = (await technician.get(`/api/plans/${planId}`).expect(200)).body.plan as { steps: { kind: string; date: string }[]; warnings: { code: string; audience: string }[] };
       const waterings = plan.steps.filter((s) => s.kind === "water");
@@ -123,5 +126,7 @@ describe("place rules", () => {
     } finally {
       await ctx.db("place_rules").where({ id: created.id }).delete();
     }
+    const lawnWithoutPlace = (await technician.get(`/api/properties/${ruthPropertyId}`).expect(200)).body.property as { placeRules: unknown };
+    expect(lawnWithoutPlace.placeRules).toBeNull();
   });
 });

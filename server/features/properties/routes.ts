@@ -4,6 +4,7 @@ import { notFound } from "../../http/errors.ts";
 import { route, type RouteSpec } from "../../http/route.ts";
 import type { SessionUser } from "../../auth/session-user.ts";
 import * as repo from "./repo.ts";
+import { placeOfProperty } from "../place-rules/repo.ts";
 
 /** A customer sees only their own lawns; anything else is "not found", never "forbidden", so ids don't leak. */
 export function canSeeProperty(user: SessionUser, property: { customerId: number }): boolean {
@@ -27,7 +28,10 @@ export function propertyRoutes(db: Db): RouteSpec[] {
       handler: async ({ user, params }) => {
         const property = await repo.findInCompany(db, user.companyId, params.id);
         if (!property || !canSeeProperty(user, property)) throw notFound("That property");
-        return { property };
+        if (user.role === "customer") return { property };
+        // Staff log visits against the lawn: its place's rules let the form warn as the saved plan will.
+        const placeRules = (await placeOfProperty(db, user.companyId, property.region, property.postalCode)) ?? null;
+        return { property: { ...property, placeRules } };
       },
     }),
   ];

@@ -54,6 +54,7 @@ export function warningsForVisit(values: VisitFormValues, property: PropertyDeta
       },
       // The condition, slope and shade picked on the form win over the record, as they will once saved.
       property: { ...property.lawn, ...toLawnOnSite(values.lawn), timeZone: property.timeZone },
+      ...(property.placeRules ? { placeRules: property.placeRules } : {}),
     };
   } catch (error) {
     if (error instanceof Incomplete) return { state: "incomplete" };
