@@ -30,6 +30,8 @@ export const IMPORT_COLUMNS = [
   "product_rate_lb_per_1000",
   "grass_species",
   "lawn_condition",
+  "slope",
+  "shade",
   "irrigation",
   "sprinkler_type",
   "precipitation_rate_in_per_h",

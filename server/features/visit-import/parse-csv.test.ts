@@ -57,6 +57,12 @@ describe("reading the CSV file", () => {
     expect(records[1]!.shapeError).toMatch(/quote \(".*does not close/);
   });
 
+  it("knows the lawn-as-found columns, in any case, and refuses a near miss", () => {
+    const records = readCsv(`${header},Lawn_Condition, SLOPE ,Shade\nR-1,1 A St,9/8/2026,overseeding,100,thin,steep,heavy\n`, 100);
+    expect(records[0]!.cells).toMatchObject({ lawn_condition: "thin", slope: "steep", shade: "heavy" });
+    expect(fileErrorOf(`${header},slope,shadow\n`)).toBe('Row 1 (the header): unknown column G "shadow". Download the template for the column names.');
+  });
+
   it("refuses a file without visit rows", () => {
     expect(fileErrorOf(`${header}\n\n`)).toMatch(/no visit rows under its header/);
   });

@@ -1,4 +1,7 @@
-import { isValidTimeZone, SERVICES, SPECIES, SPRINKLER_TYPES, type PlanInputRaw, type SprinklerType } from "#shared/engine/index";
+import {
+  isValidTimeZone, LAWN_CONDITIONS, SERVICES, SHADE_LEVELS, SLOPES, SPECIES, SPRINKLER_TYPES,
+  type PlanInputRaw, type ShadeLevel, type Slope, type SprinklerType,
+} from "#shared/engine/index";
 import type { ImportColumn } from "#shared/schemas/visit-import";
 import { z } from "zod";
 import { parseContact } from "../auth/contact.ts";
@@ -15,6 +18,8 @@ export type RowErrors = Partial<Record<ImportColumn | "row", string>>;
 export type LawnFacts = {
   grassType?: { species: string[] };
   lawnCondition?: string;
+  slope?: Slope;
+  shade?: ShadeLevel;
   irrigation?: { kind: string; sprinklerType?: SprinklerType; precipitationRateInPerHour?: number };
   currentMowingHeightIn?: number;
   mowerHighestSettingIn?: number;
@@ -39,7 +44,6 @@ export type MappedRow = {
   notes: string | null;
 };
 
-const LAWN_CONDITIONS = ["thin", "bare", "thick_dormant", "thick"];
 const IRRIGATION_KINDS = ["in_ground", "hose_end", "none"];
 
 /** A CSV row whose cells are all blank (a trailing line from a spreadsheet). */
@@ -176,6 +180,10 @@ function readLawn(reader: CellReader): LawnFacts {
   else if (grass.length) lawn.grassType = { species: grass };
   const condition = reader.oneOf("lawn_condition", LAWN_CONDITIONS);
   if (condition) lawn.lawnCondition = condition;
+  const slope = reader.oneOf("slope", SLOPES) as Slope | undefined;
+  if (slope) lawn.slope = slope;
+  const shade = reader.oneOf("shade", SHADE_LEVELS) as ShadeLevel | undefined;
+  if (shade) lawn.shade = shade;
   const irrigation = reader.oneOf("irrigation", IRRIGATION_KINDS);
   const sprinkler = reader.oneOf("sprinkler_type", SPRINKLER_TYPES) as SprinklerType | undefined;
   const rate = reader.number("precipitation_rate_in_per_h");
@@ -282,6 +290,8 @@ const engineFieldColumns: [RegExp, ImportColumn][] = [
   [/^visit\.products/, "product_rate_lb_per_1000"],
   [/^property\.grassType/, "grass_species"],
   [/^property\.lawnCondition/, "lawn_condition"],
+  [/^property\.slope/, "slope"],
+  [/^property\.shade/, "shade"],
   [/^property\.irrigation\.precipitationRateInPerHour/, "precipitation_rate_in_per_h"],
   [/^property\.irrigation\.sprinklerType/, "sprinkler_type"],
   [/^property\.irrigation/, "irrigation"],

@@ -29,6 +29,8 @@ const example: Record<ImportColumn, string> = {
   product_rate_lb_per_1000: "4",
   grass_species: "tall_fescue",
   lawn_condition: "thin",
+  slope: "gentle",
+  shade: "partial",
   irrigation: "in_ground",
   sprinkler_type: "rotor",
   precipitation_rate_in_per_h: "0.6",

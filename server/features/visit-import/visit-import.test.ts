@@ -3,6 +3,7 @@ import request from "supertest";
 import Papa from "papaparse";
 import { IMPORT_COLUMNS } from "#shared/schemas/visit-import";
 import { createTestContext, signInCustomer, signInStaff, type TestContext } from "../../test/harness.ts";
+import { addDays } from "#shared/engine/index";
 import { localDateAt } from "../../lib/local-date.ts";
 import { createCustomer, createIsolatedCompany } from "../follow-ups/testing/isolated-company.ts";
 
@@ -226,6 +227,52 @@ describe("import", () => {
     expect(rows[6]!.errors).toEqual({ irrigation: "Give the irrigation kind with a sprinkler type" });
     expect(rows[8]!.errors).toEqual({ street: expect.stringMatching(/NUL character/), customer_ref: expect.stringMatching(/NUL character/) });
     expect(rows[7]!.errors.row).toMatch(/^This row has 3 cells where the header has \d+: column D \(email\) and after are missing/);
+  });
+
+  it("reads the lawn as found (slope and shade) onto the lawn, and the row's plan is made from it", async () => {
+    type Plan = { steps: { key: string; kind: string; title: string }[]; warnings: { code: string; audience: string }[] };
+    const planOf = async (planId: number) => (await boss.get(`/api/plans/${planId}`).expect(200)).body.plan as Plan;
+    const lawnOfVisit = async (visitId: number) => {
+      const { property_id } = await ctx.db("service_visits").where({ id: visitId }).first("property_id");
+      return (await ctx.db("properties").where({ id: property_id }).first("lawn")).lawn as Record<string, unknown>;
+    };
+    // Yesterday's visits with a first frost weeks away (as the visit-form test does), so the plans water whatever month the suite runs in.
+    const today = localDateAt("America/New_York");
+    const lawnToday = { time_zone: "America/New_York", expected_first_frost: addDays(today, 50), slope: "Steep", shade: "heavy" };
+    const noSeed = { seed_species: "", seed_purity_pct: "", seed_germination_pct: "", seed_rate_lb_per_1000: "" };
+    const file = toCsv([
+      /* 2 */ good({ customer_ref: "SL-1", email: `sl1.${tag}@mail.example`, street: "1 Hillside Bank", visit_date: addDays(today, -1), services: "sod_installation", ...noSeed, ...lawnToday }),
+      /* 3 */ good({ customer_ref: "SL-2", email: `sl2.${tag}@mail.example`, street: "2 Hillside Bank", visit_date: addDays(today, -1), ...lawnToday }),
+      /* 4 */ good({ customer_ref: "SL-3", email: `sl3.${tag}@mail.example`, street: "3 Hillside Bank", slope: "cliff", shade: "dark" }),
+    ]);
+    const res = await upload(boss, "/api/visit-imports", file, "slopes.csv").expect(200);
+    expect(res.body).toMatchObject({ total: 3, created: 2, failed: 1 });
+    const [sod, seeded, wrong] = res.body.rows as { visitId: number; planId: number; errors: Record<string, string> }[];
+    expect(wrong!.errors).toEqual({ slope: "Use one of: none, gentle, steep", shade: "Use one of: none, partial, heavy" });
+
+    expect(await lawnOfVisit(sod!.visitId)).toMatchObject({ slope: "steep", shade: "heavy", lawnCondition: "thin" });
+    const sodPlan = await planOf(sod!.planId);
+    const watering = sodPlan.steps.filter((s) => s.kind === "water");
+    expect(watering.length).toBeGreaterThan(0);
+    // Steep slope: every watering is split into short runs (cycle-and-soak, shared/engine/rules/slopes.ts).
+    expect(watering.every((s) => / runs of \d+ minutes per zone/.test(s.title))).toBe(true);
+    expect(sodPlan.warnings).toContainEqual(expect.objectContaining({ code: "slope_sod_pinning", audience: "crew" }));
+    expect(sodPlan.steps.some((s) => s.key === "note:shade_care")).toBe(true);
+
+    // Tall fescue alone is not a heavy-shade grass (shared/engine/tables/shade.ts): the crew is warned.
+    const seededPlan = await planOf(seeded!.planId);
+    expect(seededPlan.warnings).toContainEqual(expect.objectContaining({ code: "shade_mix_low_tolerance", audience: "crew" }));
+    expect(seededPlan.warnings).toContainEqual(expect.objectContaining({ code: "slope_erosion_control", audience: "crew" }));
+
+    // The same lawn's next visit, shade cleared (trees came down), slope left blank: only the shade changes.
+    const before = await lawnOfVisit(sod!.visitId);
+    const next = toCsv([good({ customer_ref: "SL-1", email: `sl1.${tag}@mail.example`, street: "1 Hillside Bank", visit_date: today, services: "fertiliser_only", ...noSeed,
+      product_name: "Autumn 24-0-12", product_n: "24", product_p: "0", product_k: "12", product_rate_lb_per_1000: "3",
+      grass_species: "", lawn_condition: "", irrigation: "", precipitation_rate_in_per_h: "", mowing_height_in: "", mower_highest_in: "", expected_first_frost: "", slope: "", shade: "none" })]);
+    const again = await upload(boss, "/api/visit-imports", next, "next.csv").expect(200);
+    expect(again.body).toMatchObject({ created: 1, failed: 0 });
+    expect(await lawnOfVisit(again.body.rows[0].visitId)).toEqual({ ...before, shade: "none" });
+    expect((await planOf(again.body.rows[0].planId)).steps.some((s) => s.key === "note:shade_care")).toBe(false);
   });
 
   it("is for managers only", async () => {
