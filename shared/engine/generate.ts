@@ -21,7 +21,7 @@ import type { PlanInput } from "./schemas/plan-input.ts";
 import { sortSteps } from "./steps.ts";
 import { calculatorSummary } from "./summary.ts";
 import { CAUTION_IDS, CAUTIONS, type CautionId } from "./tables/cautions.ts";
-import type { HoldOff, PhaseRange, Plan, PlanStep, PlanWarning } from "./types.ts";
+import type { HoldOff, PhaseRange, Plan, PlanStep, PlanWarning, WarningFinding } from "./types.ts";
 
 /** Bump when the same input would produce a different plan, so stored plans can be told apart. */
 export const ENGINE_VERSION = 3;
@@ -76,19 +76,25 @@ function cautionsUsed(groups: readonly (readonly { cautions: readonly CautionId[
 }
 
 /**
- * The warnings a visit would get, without the rest of the plan: cheap enough to run on every
- * keystroke of the visit form.
+ * The warnings a visit would get, the same as its plan's, without the rest of the plan: cheap
+ * enough to run on every keystroke of the visit form.
  */
 export function visitWarnings(input: PlanInput): PlanWarning[] {
   const ctx = buildContext(input);
-  return warningsForAudiences(ctx, [
+  return warningsForAudiences(ctx, findings(ctx));
+}
+
+/** Everything the rules find about a visit, before it is worded for crew and homeowner. */
+function findings(ctx: PlanContext): WarningFinding[] {
+  return [
     ...planWarnings(ctx),
+    ...nitrogenWarnings(ctx),
     ...warmSeasonWarnings(ctx),
     ...placeRuleFindings(ctx),
     ...priorPreEmergentFindings(ctx),
     ...feedingProgramFindings(ctx),
     ...situationWarnings(ctx),
-  ]);
+  ];
 }
 
 /**
@@ -141,15 +147,7 @@ export function generatePlan(input: PlanInput): Plan {
     prepSteps: prep,
     steps,
     holdOffs,
-    warnings: warningsForAudiences(ctx, [
-      ...planWarnings(ctx),
-      ...nitrogenWarnings(ctx),
-      ...warmSeasonWarnings(ctx),
-      ...placeRuleFindings(ctx),
-      ...priorPreEmergentFindings(ctx),
-      ...feedingProgramFindings(ctx),
-      ...situationWarnings(ctx),
-    ]),
+    warnings: warningsForAudiences(ctx, findings(ctx)),
     summary: calculatorSummary(ctx),
     cautions: cautionsUsed([prep, steps, holdOffs]),
   };
