@@ -30,6 +30,6 @@ export { apiPostForm } from "./api-upload.ts";
 export { formatCalendarDay, todayInZone, localToday, relativeDay, waitingTime } from "./calendar-days.ts";
 export { describePlanDay, type PlanDay } from "./plan-day.ts";
 export { FieldError } from "./field-error.tsx";
-export { SERVICE_LABELS, serviceLabel, speciesLabel } from "./service-labels.ts";
+export { LAWN_CONDITION_LABELS, SERVICE_LABELS, SHADE_LABELS, SLOPE_LABELS, serviceLabel, speciesLabel } from "./service-labels.ts";
 export { useDebouncedValue } from "./use-debounced-value.ts";
 export { LabelledField, controlBorder, useFieldIds, type FieldIds } from "./labelled-field.tsx";

@@ -4,7 +4,8 @@ import { SHADE_LEVELS, SLOPES, SPECIES, SPRINKLER_TYPES } from "#shared/engine/i
 import { FieldError, SelectField, TextField } from "#shared/ui/index";
 import type { IrrigationKind, LawnCondition, PreviewFormValues } from "../lib/form-values.ts";
 import { FieldErrorsContext, fieldId } from "../lib/field-errors.ts";
-import { IRRIGATION_LABELS, LAWN_CONDITION_LABELS, SHADE_LABELS, SLOPE_LABELS, SPRINKLER_TYPE_LABELS, speciesLabel } from "../lib/labels.ts";
+import { LAWN_CONDITION_LABELS, SHADE_LABELS, SLOPE_LABELS } from "#shared/ui/index";
+import { IRRIGATION_LABELS, SPRINKLER_TYPE_LABELS, speciesLabel } from "../lib/labels.ts";
 import { daysAfter } from "../lib/local-dates.ts";
 import { Checkbox } from "./checkbox.tsx";
 import { CheckboxGroup } from "./checkbox-group.tsx";

@@ -4,7 +4,7 @@ import { SERVICES } from "#shared/engine/index";
 import { TextField } from "#shared/ui/index";
 import type { PreviewFormValues } from "../lib/form-values.ts";
 import { FieldErrorsContext, fieldId } from "../lib/field-errors.ts";
-import { SERVICE_LABELS } from "../lib/labels.ts";
+import { SERVICE_LABELS } from "#shared/ui/index";
 import { Checkbox } from "./checkbox.tsx";
 import { CheckboxGroup } from "./checkbox-group.tsx";
 import { FormSection } from "./form-section.tsx";

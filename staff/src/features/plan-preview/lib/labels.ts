@@ -1,28 +1,7 @@
-import { SPECIES_FACTS, type HoldOffKind, type Phase, type Provenance, type Service, type ShadeLevel, type Slope, type Species, type SprinklerType } from "#shared/engine/index";
-import type { IrrigationKind, LawnCondition } from "./form-values.ts";
+import { SPECIES_FACTS, type HoldOffKind, type Phase, type Provenance, type Species, type SprinklerType } from "#shared/engine/index";
+import type { IrrigationKind } from "./form-values.ts";
 
-/** Plain names for the engine's codes, as staff say them. */
-export const SERVICE_LABELS: Record<Service, string> = {
-  aeration: "Core aeration",
-  dethatching: "Dethatching",
-  overseeding: "Overseeding",
-  slit_seeding: "Slit seeding",
-  new_seeding: "New seeding (bare soil)",
-  starter_fertiliser: "Starter fertiliser",
-  fertiliser_only: "Fertilizer only",
-  top_dressing: "Top dressing",
-  sod_installation: "Sod installation",
-};
-
-export const LAWN_CONDITION_LABELS: Record<LawnCondition, string> = {
-  thin: "Thin",
-  bare: "Bare soil",
-  thick_dormant: "Thick, but dormant",
-  thick: "Thick",
-};
-
-export const SLOPE_LABELS: Record<Slope, string> = { none: "Flat or nearly flat", gentle: "Gentle slope", steep: "Steep slope" };
-export const SHADE_LABELS: Record<ShadeLevel, string> = { none: "Full sun", partial: "Partial shade", heavy: "Heavy shade" };
+/** Plain names for the engine's codes, as staff say them (services, lawn condition, slope and shade: `#shared/ui`). */
 
 export const IRRIGATION_LABELS: Record<IrrigationKind, string> = {
   in_ground: "In-ground sprinkler system",

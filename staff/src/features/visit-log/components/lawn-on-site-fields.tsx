@@ -3,7 +3,8 @@ import { SelectField } from "#shared/ui/index";
 import { useProperty } from "../api/get-property.ts";
 import { useFieldError } from "../lib/field-errors.ts";
 import { fieldId, type VisitFormValues } from "../lib/form-values.ts";
-import { recordedLawnOnSite, SHADE_LABELS, shadeOptions, SLOPE_LABELS, slopeOptions } from "../lib/lawn-on-site.ts";
+import { SHADE_LABELS, SLOPE_LABELS } from "#shared/ui/index";
+import { recordedLawnOnSite, shadeOptions, slopeOptions } from "../lib/lawn-on-site.ts";
 
 /** Slope and shade as seen today (inside "The lawn today"): they change the plan's watering, seed advice and feeding, and are kept on the lawn. */
 export function LawnOnSiteFields({ propertyId }: { propertyId: number | null }) {

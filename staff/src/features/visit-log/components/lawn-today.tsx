@@ -1,18 +1,11 @@
 import { useFormContext, useWatch } from "react-hook-form";
-import { LAWN_CONDITIONS, SEEDING_SERVICES, type LawnCondition } from "#shared/engine/index";
-import { Button, Notice, SelectField } from "#shared/ui/index";
+import { LAWN_CONDITIONS, SEEDING_SERVICES } from "#shared/engine/index";
+import { Button, LAWN_CONDITION_LABELS, Notice, SelectField } from "#shared/ui/index";
 import { useFieldError } from "../lib/field-errors.ts";
 import { fieldId, type VisitFormValues } from "../lib/form-values.ts";
 import { isSeedingVisit } from "../lib/prior-pre-emergent.ts";
 import { FormSection } from "./form-section.tsx";
 import { LawnOnSiteFields } from "./lawn-on-site-fields.tsx";
-
-const CONDITION_LABELS: Record<LawnCondition, string> = {
-  thin: "Thin or patchy",
-  bare: "Bare soil (new lawn)",
-  thick: "Thick",
-  thick_dormant: "Thick but brown (dormant after summer)",
-};
 
 /**
  * The lawn as the crew finds it today: saved as the lawn's condition, and the plan follows it.
@@ -40,7 +33,7 @@ export function LawnToday({ propertyId }: { propertyId: number | null }) {
         hint="Filled in from the lawn's record; change it if the lawn looks different today."
         placeholderOption="As recorded"
         error={error}
-        options={LAWN_CONDITIONS.map((c) => ({ value: c, label: CONDITION_LABELS[c] }))}
+        options={LAWN_CONDITIONS.map((c) => ({ value: c, label: LAWN_CONDITION_LABELS[c] }))}
         {...register("lawn.lawnCondition")}
       />
       <LawnOnSiteFields propertyId={propertyId} />

@@ -1,5 +1,6 @@
 import { SHADE_LEVELS, SLOPES, type LawnCondition, type ShadeLevel, type Slope } from "#shared/engine/index";
 import type { LawnOnSite } from "#shared/schemas/visits";
+import { SHADE_LABELS, SLOPE_LABELS } from "#shared/ui/index";
 
 /** As typed: "" means "not noted", so the lawn keeps what is recorded. */
 export interface LawnOnSiteValues {
@@ -10,8 +11,6 @@ export interface LawnOnSiteValues {
 
 export const emptyLawnOnSite = (): LawnOnSiteValues => ({ lawnCondition: "", slope: "", shade: "" });
 
-export const SLOPE_LABELS: Record<Slope, string> = { none: "Flat or nearly flat", gentle: "Gentle slope", steep: "Steep slope" };
-export const SHADE_LABELS: Record<ShadeLevel, string> = { none: "Full sun", partial: "Partial shade", heavy: "Heavy shade" };
 
 export const slopeOptions = SLOPES.map((value) => ({ value, label: SLOPE_LABELS[value] }));
 export const shadeOptions = SHADE_LEVELS.map((value) => ({ value, label: SHADE_LABELS[value] }));
