@@ -41,6 +41,8 @@ export interface CycleAndSoak {
   readonly soakMinutes: number;
   /** The cycle's minutes before it was split; runs never add up to more. */
   readonly minutesBefore: number;
+  /** The first run of each watering ("HH:MM", sorted): one reminder, one calendar event per watering, not per run. */
+  readonly cycleStarts: readonly string[];
 }
 
 export interface PlanStep {

@@ -8,6 +8,13 @@ import { bigRecordId, recordId } from "./ids.ts";
 const provenanceSchema = z.enum(["published", "common practice", "from memory"]);
 export const whySchema = z.object({ text: z.string(), source: z.string(), provenance: provenanceSchema });
 
+export const cycleAndSoakSchema = z.object({
+  runsPerCycle: z.number().int(),
+  soakMinutes: z.number(),
+  minutesBefore: z.number(),
+  cycleStarts: z.array(z.string()),
+});
+
 export const stepStateSchema = z.enum(["pending", "done", "skipped"]);
 export type StepState = z.infer<typeof stepStateSchema>;
 
@@ -21,6 +28,8 @@ export const storedStepSchema = z.object({
   detail: z.string(),
   times: z.array(z.string()).optional(),
   minutesPerCycle: z.number().optional(),
+  /** On a slope: each watering is split into runs of `minutesPerCycle`; `times` lists every run, `cycleStarts` each watering's first. */
+  cycleAndSoak: cycleAndSoakSchema.optional(),
   heightIn: z.number().optional(),
   why: whySchema,
   cautions: z.array(z.string()),

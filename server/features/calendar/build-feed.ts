@@ -1,5 +1,6 @@
 import ical, { ICalEventTransparency } from "ical-generator";
 import { addDays } from "#shared/engine/dates";
+import { wateringsOf } from "#shared/engine/waterings";
 import { holdOffSchema, type StoredHoldOff } from "#shared/schemas/plans";
 import { followUpReasonLabels, type FollowUpReason } from "#shared/schemas/follow-ups";
 import type { FeedPlan, FeedStep, FeedVisit } from "./repo.ts";
@@ -31,9 +32,29 @@ function stepDescription(content: Record<string, unknown>): string | null {
   return parts.length > 0 ? parts.join("\n\n") : null;
 }
 
+const isClock = (t: unknown): t is string => typeof t === "string" && /^([01]\d|2[0-3]):[0-5]\d$/.test(t);
+
 function wateringTimes(content: Record<string, unknown>): string[] {
   const times = content.times;
-  return Array.isArray(times) ? times.filter((t): t is string => typeof t === "string" && /^([01]\d|2[0-3]):[0-5]\d$/.test(t)) : [];
+  return Array.isArray(times) ? times.filter(isClock) : [];
+}
+
+/** Stored cycle-and-soak (slopes), when it is whole enough to group the runs by watering. */
+function cycleAndSoakOf(content: Record<string, unknown>): { runsPerCycle: number; soakMinutes: number; cycleStarts: string[] } | undefined {
+  const c = content.cycleAndSoak as { runsPerCycle?: unknown; soakMinutes?: unknown; cycleStarts?: unknown } | undefined;
+  if (!c || typeof c.runsPerCycle !== "number" || typeof c.soakMinutes !== "number" || !Array.isArray(c.cycleStarts)) return undefined;
+  const cycleStarts = c.cycleStarts.filter(isClock);
+  return cycleStarts.length > 0 ? { runsPerCycle: c.runsPerCycle, soakMinutes: c.soakMinutes, cycleStarts } : undefined;
+}
+
+/** "In 4 short runs of 2 minutes, about 30 minutes apart to soak in: 7:00, 7:32, 8:04, 8:36." */
+const runsLine = (runs: readonly string[], minutes: number, soak: number) =>
+  `In ${runs.length} short runs of ${minutes} ${minutes === 1 ? "minute" : "minutes"} for each zone or spot, with about ${soak} minutes' pause between runs so the water soaks in instead of running down the slope. Start each run at ${runs.map(clockLabel).join(", ")}.`;
+
+/** "7:00 am" for "07:00": calendar descriptions are plain text. */
+function clockLabel(time: string): string {
+  const [h, m] = time.split(":").map(Number) as [number, number];
+  return `${h % 12 === 0 ? 12 : h % 12}:${String(m).padStart(2, "0")} ${h < 12 ? "am" : "pm"}`;
 }
 
 /** "HH:MM" plus minutes, kept on the same day (a cycle is never longer than the evening). */
@@ -47,7 +68,7 @@ const yearOf = (date: string) => Number(date.slice(0, 4));
 
 /**
  * The homeowner's care plans as an iCalendar feed (RFC 5545): an all-day event per daily
- * step, a timed event per watering start (in the lawn's own time zone, with its VTIMEZONE),
+ * step, a timed event per watering (on a slope spanning its short runs) (in the lawn's own time zone, with its VTIMEZONE),
  * and each hold-off window as a multi-day all-day event. UIDs come from the steps' stable
  * keys, so a recomputed plan updates events in place instead of duplicating them.
  */
@@ -97,13 +118,18 @@ export function buildFeed(input: FeedInput): string {
       continue;
     }
     const minutes = typeof step.content.minutesPerCycle === "number" ? step.content.minutesPerCycle : DEFAULT_CYCLE_MINUTES;
-    for (const time of times) {
+    // On a slope one event per watering, from its first run to the end of its last, its runs in the description.
+    const cycleAndSoak = cycleAndSoakOf(step.content);
+    for (const { start, runs } of wateringsOf({ times, cycleAndSoak })) {
+      const last = runs[runs.length - 1]!;
+      const description = cycleAndSoak && runs.length > 1 ? [runsLine(runs, minutes, cycleAndSoak.soakMinutes), common.description].filter(Boolean).join("\n\n") : common.description;
       calendar.createEvent({
         ...common,
-        id: `${step.planId}.${step.key}.${time.replace(":", "")}@sproutline`,
+        description,
+        id: `${step.planId}.${step.key}.${start.replace(":", "")}@sproutline`,
         timezone: plan.timeZone,
-        start: wallClock(step.date, time, plan.timeZone),
-        end: wallClock(step.date, addMinutes(time, minutes), plan.timeZone),
+        start: wallClock(step.date, start, plan.timeZone),
+        end: wallClock(step.date, addMinutes(last, minutes), plan.timeZone),
       });
     }
   }

@@ -17,7 +17,7 @@ export type StepRow = {
 };
 
 /** What a step says beyond its date, kind and title; stored as one JSON value. */
-type StepContent = Pick<StoredStep, "detail" | "times" | "minutesPerCycle" | "heightIn" | "why" | "cautions"> & {
+type StepContent = Pick<StoredStep, "detail" | "times" | "minutesPerCycle" | "cycleAndSoak" | "heightIn" | "why" | "cautions"> & {
   feed?: PlanStep["feed"];
   restrictedBy?: PlanStep["restrictedBy"];
 };
@@ -26,6 +26,7 @@ const contentOf = (s: PlanStep): StepContent => ({
   detail: s.detail,
   times: s.times ? [...s.times] : undefined,
   minutesPerCycle: s.minutesPerCycle,
+  cycleAndSoak: s.cycleAndSoak ? { ...s.cycleAndSoak, cycleStarts: [...s.cycleAndSoak.cycleStarts] } : undefined,
   heightIn: s.heightIn,
   why: s.why,
   cautions: [...s.cautions],
@@ -45,6 +46,7 @@ export function toStoredStep(row: StepRow): StoredStep {
     detail: c.detail,
     ...(c.times ? { times: c.times } : {}),
     ...(c.minutesPerCycle !== undefined ? { minutesPerCycle: c.minutesPerCycle } : {}),
+    ...(c.cycleAndSoak ? { cycleAndSoak: c.cycleAndSoak } : {}),
     ...(c.heightIn !== undefined ? { heightIn: c.heightIn } : {}),
     why: c.why,
     cautions: c.cautions,
@@ -66,6 +68,7 @@ export function toEngineStep(row: StepRow): PlanStep {
     detail: c.detail,
     ...(c.times ? { times: c.times } : {}),
     ...(c.minutesPerCycle !== undefined ? { minutesPerCycle: c.minutesPerCycle } : {}),
+    ...(c.cycleAndSoak ? { cycleAndSoak: c.cycleAndSoak } : {}),
     ...(c.heightIn !== undefined ? { heightIn: c.heightIn } : {}),
     ...(c.feed ? { feed: c.feed } : {}),
     ...(c.restrictedBy ? { restrictedBy: c.restrictedBy } : {}),

@@ -64,3 +64,30 @@ describe("channels", () => {
     expect(fallbackChannel("sms", "none", both, new Set())).toBeNull();
   });
 });
+
+describe("watering nudges on a slope", () => {
+  it("one nudge per watering, at its first run, not one per short run", () => {
+    const slope: PlanReminderInput = {
+      ...base,
+      dailyTime: "06:00",
+      window: { start: "06:00", end: "21:00" },
+      steps: [
+        {
+          date: "2026-12-02",
+          kind: "water",
+          state: "pending",
+          // Two waterings of three runs each (rules/slopes.ts: run + 30-minute pause).
+          times: ["07:00", "07:34", "08:08", "12:00", "12:34", "13:08"],
+          cycleAndSoak: { runsPerCycle: 3, cycleStarts: ["07:00", "12:00"] },
+        },
+      ],
+    };
+    const nudges = desiredReminders(slope, now).filter((r) => r.kind === "watering_nudge");
+    expect(nudges.map((r) => r.localTime)).toEqual(["07:00", "12:00"]);
+  });
+
+  it("a step stored before waterings were recorded still gets a nudge per time", () => {
+    const old: PlanReminderInput = { ...base, steps: [{ date: "2026-12-02", kind: "water", state: "pending", times: ["12:00", "12:34"] }] };
+    expect(desiredReminders(old, now).filter((r) => r.kind === "watering_nudge").map((r) => r.localTime)).toEqual(["12:00", "12:34"]);
+  });
+});

@@ -1,3 +1,4 @@
+import { wateringStarts } from "#shared/engine/waterings";
 import type { Channel } from "./channels.ts";
 import { nextAllowedInstant, type SendWindow } from "./quiet-hours.ts";
 import { localMomentAt, zonedTimeToUtc } from "./schedule.ts";
@@ -11,7 +12,14 @@ import { localMomentAt, zonedTimeToUtc } from "./schedule.ts";
 export const PLAN_REMINDER_KINDS = ["daily_summary", "watering_nudge"] as const;
 export type ReminderKind = (typeof PLAN_REMINDER_KINDS)[number];
 
-export type StepForReminders = { date: string; kind: string; state: "pending" | "done" | "skipped"; times?: readonly string[] };
+export type StepForReminders = {
+  date: string;
+  kind: string;
+  state: "pending" | "done" | "skipped";
+  times?: readonly string[];
+  /** On a slope `times` lists every short run; one nudge goes at the first run of each watering. */
+  cycleAndSoak?: { runsPerCycle: number; cycleStarts?: readonly string[] };
+};
 
 export type PlanReminderInput = {
   active: boolean;
@@ -52,7 +60,7 @@ export function desiredReminders(plan: PlanReminderInput, now: Date): DesiredRem
       for (const channel of plan.channels) out.push({ kind: "daily_summary", localDate: date, localTime: plan.dailyTime, channel, dueAt: summaryDue });
     }
     if (!plan.wateringNudges) continue;
-    const times = new Set(steps.filter((s) => s.kind === "water").flatMap((s) => s.times ?? []));
+    const times = new Set(steps.filter((s) => s.kind === "water").flatMap((s) => wateringStarts(s)));
     for (const time of [...times].sort()) {
       const asked = zonedTimeToUtc(date, time, zone);
       const due = nextAllowedInstant(asked, zone, plan.window);

@@ -9,6 +9,7 @@ import { dailySummaryEmail, wateringNudgeEmail } from "./templates/email.ts";
 import { dailySummarySms, wateringNudgeSms } from "./templates/sms.ts";
 import type { Language, ReminderStep } from "./templates/wording.ts";
 import { planUrl, unsubscribeUrl } from "./unsubscribe.ts";
+import { wateringStarts } from "#shared/engine/waterings";
 import { composeNotice, isNoticeKind } from "../notices/compose.ts";
 import { replyTokensForPlans } from "../notices/reply-to.ts";
 
@@ -94,7 +95,13 @@ async function loadRecipients(db: Db, ids: number[]): Promise<Map<number, Recipi
   );
 }
 
-type StepRow = { plan_id: number; date: string; kind: string; title: string; content: { detail?: string; times?: string[]; minutesPerCycle?: number } };
+type StepRow = {
+  plan_id: number;
+  date: string;
+  kind: string;
+  title: string;
+  content: { detail?: string; times?: string[]; minutesPerCycle?: number; cycleAndSoak?: ReminderStep["cycleAndSoak"] };
+};
 
 async function pendingSteps(db: Db, rows: ReminderRow[]): Promise<Map<string, ReminderStep[]>> {
   const pairs = [...new Map(rows.map((r) => [`${r.plan_id}|${r.local_date}`, [r.plan_id, r.local_date]])).values()];
@@ -107,7 +114,14 @@ async function pendingSteps(db: Db, rows: ReminderRow[]): Promise<Map<string, Re
     .select<StepRow[]>("plan_id", "date", "kind", "title", "content");
   for (const s of steps) {
     const key = `${s.plan_id}|${s.date}`;
-    byDay.set(key, [...(byDay.get(key) ?? []), { kind: s.kind, title: s.title, detail: s.content?.detail, times: s.content?.times, minutesPerCycle: s.content?.minutesPerCycle }]);
+    byDay.set(key, [...(byDay.get(key) ?? []), {
+        kind: s.kind,
+        title: s.title,
+        detail: s.content?.detail,
+        times: s.content?.times,
+        minutesPerCycle: s.content?.minutesPerCycle,
+        cycleAndSoak: s.content?.cycleAndSoak,
+      }]);
   }
   return byDay;
 }
@@ -132,7 +146,8 @@ function compose(row: ReminderRow & { kind: "daily_summary" | "watering_nudge" }
     const email = dailySummaryEmail({ companyName: recipient.companyName, firstName: recipient.firstName, language: recipient.language, planUrl: link, unsubscribeUrl: unsubscribeUrl(config, recipient.customerId) }, row.local_date, steps);
     return { subject: email.subject, body: email.text, html: email.html };
   }
-  const watering = steps.find((s) => s.kind === "water" && s.times?.includes(row.local_time));
+  // On a slope only a watering's first run has a nudge; a run's own time is not one any more.
+  const watering = steps.find((s) => s.kind === "water" && wateringStarts(s).includes(row.local_time));
   if (!watering) return undefined;
   if (row.channel === "sms") return { subject: null, body: wateringNudgeSms({ senderName: recipient.senderName, language: recipient.language, planUrl: link, intro }, row.local_time, watering), html: null };
   const email = wateringNudgeEmail({ companyName: recipient.companyName, firstName: recipient.firstName, language: recipient.language, planUrl: link, unsubscribeUrl: unsubscribeUrl(config, recipient.customerId) }, row.local_time, watering);

@@ -64,7 +64,12 @@ export async function reconcilePlanReminders(db: Db, planId: number, now: Date =
   const steps = await db("plan_steps")
     .where({ plan_id: planId })
     .andWhere("date", ">=", today)
-    .select<{ date: string; kind: string; state: StepForReminders["state"]; content: { times?: string[] } }[]>("date", "kind", "state", "content");
+    .select<{ date: string; kind: string; state: StepForReminders["state"]; content: { times?: string[]; cycleAndSoak?: StepForReminders["cycleAndSoak"] } }[]>(
+      "date",
+      "kind",
+      "state",
+      "content",
+    );
 
   const desired = desiredReminders(
     {
@@ -74,7 +79,7 @@ export async function reconcilePlanReminders(db: Db, planId: number, now: Date =
       channels: deliveryChannels(preferences.channels, contacts, new Set(optOuts.map((o) => o.channel))),
       dailyTime: preferences.dailyTime,
       wateringNudges: preferences.wateringNudges,
-      steps: steps.map((s) => ({ date: s.date, kind: s.kind, state: s.state, times: s.content?.times })),
+      steps: steps.map((s) => ({ date: s.date, kind: s.kind, state: s.state, times: s.content?.times, cycleAndSoak: s.content?.cycleAndSoak })),
     },
     now,
   );

@@ -30,7 +30,8 @@ describe("cycle-and-soak on slopes", () => {
     const plan = generatePlan(valid(withChanges({ visit: { services: ["aeration"], seedMix: [], seedRateLbPer1000: undefined }, property: { slope: "gentle" } })));
     const deep = plan.steps.find((s) => s.key === "water:2026-09-10:1")!;
     expect(deep.minutesPerCycle).toBe(7);
-    expect(deep.cycleAndSoak).toEqual({ runsPerCycle: 4, soakMinutes: 30, minutesBefore: 30 });
+    // One watering, so one start: the reminder and calendar event come at 06:00 only.
+    expect(deep.cycleAndSoak).toEqual({ runsPerCycle: 4, soakMinutes: 30, minutesBefore: 30, cycleStarts: ["06:00"] });
     // The program's deep-watering start (06:00), then every run + pause (7 + 30 min).
     expect(deep.times).toEqual(["06:00", "06:37", "07:14", "07:51"]);
     expect(deep.title).toBe("Water the lawn deeply today, 4 runs of 7 minutes per zone");

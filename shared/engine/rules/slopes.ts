@@ -47,21 +47,27 @@ export function splitCycle(minutes: number, rateInPerHour: number, slope: Exclud
   return { runs, runMinutes: Math.max(1, Math.floor(minutes / runs)) };
 }
 
-/** Every run's start, each cycle's runs spaced by run + pause, kept to real times of that day and before midnight. */
-function runStarts(ctx: PlanContext, dayNumber: number, times: readonly string[], runs: number, runMinutes: number): string[] {
+/**
+ * Every run's start, each cycle's runs spaced by run + pause, kept to real times of that day and before midnight;
+ * and each cycle's first run, so reminders and calendars can speak of one watering in several runs.
+ */
+function runStarts(ctx: PlanContext, dayNumber: number, times: readonly string[], runs: number, runMinutes: number): { times: string[]; cycleStarts: string[] } {
   const spacing = runMinutes + CYCLE_AND_SOAK.soakMinutes;
   const minutes: number[] = [];
+  const firsts: number[] = [];
   for (const time of times) {
     const start = minutesOfLocalTime(time);
     for (let i = 0; i < runs; i++) {
       const m = start + i * spacing;
       if (m + runMinutes > 24 * 60) break;
       const real = ctx.clock.nearestReal(dayNumber, m);
+      if (i === 0 && !firsts.includes(real)) firsts.push(real);
       if (!minutes.includes(real)) minutes.push(real);
     }
   }
   minutes.sort((a, b) => a - b);
-  return minutes.map(localTimeFromMinutes);
+  firsts.sort((a, b) => a - b);
+  return { times: minutes.map(localTimeFromMinutes), cycleStarts: firsts.map(localTimeFromMinutes) };
 }
 
 /** Minutes of water a watering step asks for in one day (what cycle-and-soak may never exceed). */
@@ -86,9 +92,10 @@ export function applyCycleAndSoak(ctx: PlanContext, steps: readonly PlanStep[]):
     const before = step.minutesPerCycle;
     const { runs, runMinutes } = splitCycle(before, rate, slope);
     if (runs <= 1) return step;
-    const cycleAndSoak: CycleAndSoak = { runsPerCycle: runs, soakMinutes: CYCLE_AND_SOAK.soakMinutes, minutesBefore: before };
+    const split = step.times && step.times.length > 0 ? runStarts(ctx, toDayNumber(step.date), step.times, runs, runMinutes) : undefined;
+    const times = split ? split.times : step.times;
+    const cycleAndSoak: CycleAndSoak = { runsPerCycle: runs, soakMinutes: CYCLE_AND_SOAK.soakMinutes, minutesBefore: before, cycleStarts: split?.cycleStarts ?? [] };
     const oldAmount = `${before} minutes`;
-    const times = step.times && step.times.length > 0 ? runStarts(ctx, toDayNumber(step.date), step.times, runs, runMinutes) : step.times;
     return {
       ...step,
       title: step.title.includes(oldAmount) ? step.title.replace(oldAmount, TEXT.split(runs, runMinutes)) : step.title,

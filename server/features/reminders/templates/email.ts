@@ -1,4 +1,4 @@
-import { dateLabel, timeLabel, type Language, type ReminderStep } from "./wording.ts";
+import { dateLabel, runsOfWatering, timeLabel, type Language, type ReminderStep } from "./wording.ts";
 import { escapeHtml } from "../../../messaging/escape-html.ts";
 
 /** Our own plain template: a heading, the day's steps, a button to the plan, and how to stop. Inline styles only (mail clients drop <style>). */
@@ -21,6 +21,8 @@ const words = {
     nudgeSubject: (time: string) => `Watering time: ${time}`,
     nudgeHeading: (time: string) => `Time to water (${time})`,
     run: (minutes: number) => `Run each zone or spot for about ${minutes} minutes.`,
+    runs: (runs: number, minutes: number, soak: number, times: string) =>
+      `Water in ${runs} short runs of about ${minutes} minutes for each zone or spot, pausing about ${soak} minutes between runs so the water soaks in instead of running down the slope. Start each run at: ${times}.`,
     hello: (name: string) => `Hello ${name},`,
     open: "Open your care plan",
     why: (company: string) => `You get these reminders from ${company} because of your lawn care plan.`,
@@ -32,6 +34,8 @@ const words = {
     nudgeSubject: (time: string) => `Hora de regar: ${time}`,
     nudgeHeading: (time: string) => `Hora de regar (${time})`,
     run: (minutes: number) => `Riegue cada zona unos ${minutes} minutos.`,
+    runs: (runs: number, minutes: number, soak: number, times: string) =>
+      `Riegue en ${runs} tandas cortas de unos ${minutes} minutos por zona, con pausas de unos ${soak} minutos entre una y otra para que el agua penetre en vez de correr cuesta abajo. Empiece cada tanda a las: ${times}.`,
     hello: (name: string) => `Hola ${name}:`,
     open: "Ver su plan de cuidado",
     why: (company: string) => `Recibe estos recordatorios de ${company} por su plan de cuidado del césped.`,
@@ -80,6 +84,11 @@ export function dailySummaryEmail(frame: EmailFrame, localDate: string, steps: r
 export function wateringNudgeEmail(frame: EmailFrame, time: string, step: ReminderStep): ComposedEmail {
   const w = words[frame.language];
   const label = timeLabel(time, frame.language);
-  const detail = step.minutesPerCycle ? w.run(step.minutesPerCycle) : step.detail;
+  const runs = runsOfWatering(step, time);
+  const detail = !step.minutesPerCycle
+    ? step.detail
+    : step.cycleAndSoak && runs.length > 1
+      ? w.runs(runs.length, step.minutesPerCycle, step.cycleAndSoak.soakMinutes, runs.map((t) => timeLabel(t, frame.language)).join(", "))
+      : w.run(step.minutesPerCycle);
   return render(frame, w.nudgeSubject(label), w.nudgeHeading(label), [{ title: step.title, detail }]);
 }

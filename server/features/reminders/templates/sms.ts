@@ -1,5 +1,5 @@
 import { gsm7Capacity, smsLength, toGsm7 } from "./gsm.ts";
-import { dateLabel, timeLabel, type Language, type ReminderStep } from "./wording.ts";
+import { dateLabel, runsOfWatering, timeLabel, type Language, type ReminderStep } from "./wording.ts";
 
 /*
  * Reminder texts: every one starts with the company's name (CTIA sender identification), the
@@ -25,6 +25,8 @@ const words = {
     intro: "Reply STOP to stop, HELP for help.",
     water: (time: string) => `Watering time (${time}).`,
     run: (minutes: number) => `Run each zone or spot about ${minutes} min.`,
+    runs: (runs: number, minutes: number, soak: number, times: string) =>
+      `Water in ${runs} short runs of about ${minutes} min each zone or spot, with ${soak}-min pauses so it soaks in: ${times}.`,
     done: "Reply DONE when today's watering is finished.",
   },
   es: {
@@ -34,6 +36,8 @@ const words = {
     intro: "Responda STOP para no recibir mas, HELP para ayuda.",
     water: (time: string) => `Hora de regar (${time}).`,
     run: (minutes: number) => `Riegue cada zona unos ${minutes} min.`,
+    runs: (runs: number, minutes: number, soak: number, times: string) =>
+      `Riegue en ${runs} tandas cortas de unos ${minutes} min por zona, con pausas de ${soak} min para que el agua penetre: ${times}.`,
     done: "Responda DONE cuando termine el riego de hoy.",
   },
 } as const;
@@ -68,10 +72,19 @@ export function dailySummarySms(frame: SmsFrame, localDate: string, steps: reado
   return hardTrim(assemble(frame, w.today(dateLabel(localDate, frame.language))));
 }
 
-/** "Company: Watering time (7:00 am). Run each zone or spot about 6 min. Reply DONE when … Plan: https://…" */
+/**
+ * "Company: Watering time (7:00 am). Run each zone or spot about 6 min. Reply DONE when … Plan: https://…"
+ * On a slope one text per watering, naming its short runs, rather than one per run.
+ */
 export function wateringNudgeSms(frame: SmsFrame, time: string, step: ReminderStep): string {
   const w = words[frame.language];
-  const middle = [w.water(timeLabel(time, frame.language)), step.minutesPerCycle ? w.run(step.minutesPerCycle) : "", w.done].filter(Boolean).join(" ");
+  const runs = runsOfWatering(step, time);
+  const amount = !step.minutesPerCycle
+    ? ""
+    : step.cycleAndSoak && runs.length > 1
+      ? w.runs(runs.length, step.minutesPerCycle, step.cycleAndSoak.soakMinutes, runs.map((t) => timeLabel(t, frame.language)).join(", "))
+      : w.run(step.minutesPerCycle);
+  const middle = [w.water(timeLabel(time, frame.language)), amount, w.done].filter(Boolean).join(" ");
   const text = assemble(frame, middle);
   return fits(text) ? text : hardTrim(text);
 }

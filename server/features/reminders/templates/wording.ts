@@ -1,3 +1,5 @@
+import { wateringsOf } from "#shared/engine/waterings";
+
 /** What a reminder says about one plan step (from plan_steps: title, and content.detail/times/minutesPerCycle). */
 export type ReminderStep = {
   kind: string;
@@ -5,7 +7,14 @@ export type ReminderStep = {
   detail?: string;
   times?: string[];
   minutesPerCycle?: number;
+  /** On a slope: each watering in `runsPerCycle` runs of `minutesPerCycle`, `cycleStarts` each watering's first run. */
+  cycleAndSoak?: { runsPerCycle: number; soakMinutes: number; cycleStarts?: string[] };
 };
+
+/** The runs of the watering that starts at `start` (just `start` on flat ground). */
+export function runsOfWatering(step: ReminderStep, start: string): string[] {
+  return wateringsOf(step).find((w) => w.start === start)?.runs ?? [start];
+}
 
 export type Language = "en" | "es";
 

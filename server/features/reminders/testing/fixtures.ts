@@ -35,7 +35,15 @@ export function freshPhone(): string {
   return `+1331${phoneCounter}`;
 }
 
-export type FixtureStep = { date: string; kind?: string; title?: string; times?: string[]; minutesPerCycle?: number; state?: "pending" | "done" | "skipped" };
+export type FixtureStep = {
+  date: string;
+  kind?: string;
+  title?: string;
+  times?: string[];
+  minutesPerCycle?: number;
+  cycleAndSoak?: { runsPerCycle: number; soakMinutes: number; minutesBefore: number; cycleStarts: string[] };
+  state?: "pending" | "done" | "skipped";
+};
 
 export type FixtureCustomer = { customerId: number; userId: number; planId: number; propertyId: number; phone: string | null; email: string | null };
 
@@ -70,7 +78,7 @@ export async function addSteps(db: Db, planId: number, steps: FixtureStep[]) {
       phase: "germination",
       kind: s.kind ?? "water",
       title: s.title ?? (s.kind === "mow" ? "Mow to 3.5 in" : "Water the seeded areas lightly"),
-      content: JSON.stringify({ detail: "Keep the seed damp.", times: s.times ?? (s.kind && s.kind !== "water" ? undefined : ["09:00", "13:00"]), minutesPerCycle: s.minutesPerCycle ?? 6, why: { text: "", source: "", provenance: "common practice" }, cautions: [] }),
+      content: JSON.stringify({ detail: "Keep the seed damp.", times: s.times ?? (s.kind && s.kind !== "water" ? undefined : ["09:00", "13:00"]), minutesPerCycle: s.minutesPerCycle ?? 6, cycleAndSoak: s.cycleAndSoak, why: { text: "", source: "", provenance: "common practice" }, cautions: [] }),
       state: s.state ?? "pending",
     })),
   );
