@@ -64,6 +64,13 @@ describe("the fall feeding program for a thick lawn", () => {
     expect(programOf(thickLawn({ date: "2026-11-20" }, { expectedFirstFrost: undefined }))).toEqual([]);
   });
 
+  it("plans its feedings before the ground turns cold rather than after it, where they would be dropped", () => {
+    // Frost October 10 (entered): cold ground from October 24 (frost + 14 days, common practice; tables/seasons.ts).
+    // Both feedings fit before it, 32 days apart (at least 4 weeks, common practice), instead of the second falling on November 1.
+    const steps = programOf(thickLawn({ date: "2026-09-20" }, { expectedFirstFrost: "2026-10-10" }));
+    expect(steps.map((s) => s.date)).toEqual(["2026-09-21", "2026-10-23"]);
+  });
+
   it("follows the southern fall (March to May) in the southern hemisphere", () => {
     // A first frost in late June (a mild coast) leaves the whole southern fall open to feeding.
     const raw = thickLawn({ date: "2026-04-01" }, { timeZone: "Australia/Sydney", expectedFirstFrost: "2026-06-25" });

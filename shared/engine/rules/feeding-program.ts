@@ -42,6 +42,12 @@ function lastDayOfFall(ctx: PlanContext): number {
   return daysFromCivil(year, month, daysInMonth(year, month)) - ctx.visitDay;
 }
 
+/** The day before the season closes to feeding (cold ground), so no feeding is planned only to be dropped. */
+function lastOpenDay(ctx: PlanContext): number {
+  for (const closed of ctx.season.feedingClosed) if (closed.to > 0) return closed.from - 1;
+  return Number.POSITIVE_INFINITY;
+}
+
 export interface FeedingProgramPlan {
   /** Nitrogen the visit put down, per 1,000 ft². */
   readonly appliedAtVisit: number;
@@ -52,7 +58,8 @@ export interface FeedingProgramPlan {
 /**
  * What is left of the ~2 lb N after the visit's own feeding, split into the fewest feedings of at
  * most 1 lb (rounded to the quarter pound), 6 weeks apart, closer (never under 4) to fit before the
- * end of the fall and of the plan. When even 4 weeks apart not all fit, the ones that do carry
+ * end of the fall, of the plan and of the season's feeding days. When even 4 weeks apart not all
+ * fit, the ones that do carry
  * up to the 1 lb cap each and the total falls short rather than any feeding going over.
  */
 export function feedingProgram(ctx: PlanContext): FeedingProgramPlan {
@@ -60,7 +67,7 @@ export function feedingProgram(ctx: PlanContext): FeedingProgramPlan {
   const remaining = PROGRAM.totalLbNPer1000 - appliedAtVisit;
   if (remaining < PROGRAM.minPerFeedingLbN) return { appliedAtVisit, feedings: [] };
   const visitCounted = appliedAtVisit >= PROGRAM.countsAsFeedingFromLbN;
-  const lastDay = Math.min(lastDayOfFall(ctx), ctx.timeline.planEnd);
+  const lastDay = Math.min(lastDayOfFall(ctx), ctx.timeline.planEnd, lastOpenDay(ctx));
   // Without a feeding at the visit, the first one goes down the next day.
   const first = visitCounted ? PROGRAM.minWeeksApart * 7 : 1;
   if (first > lastDay) return { appliedAtVisit, feedings: [] };
