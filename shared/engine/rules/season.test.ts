@@ -106,6 +106,8 @@ describe("dormant seeding", () => {
     expect(plan.meta.germinationWateringEnds! >= "2027-04-22").toBe(true);
     // The starter is spread when the seed starts to grow, not on frozen ground.
     expect(plan.steps.find((s) => s.key === "feed:starter")?.date).toBe("2027-04-01");
+    // Measuring the sprinkler waits for spring too.
+    expect(plan.steps.find((s) => s.key === "note:catch_can_test")?.date).toBe("2027-04-01");
     const homeowner = plan.warnings.find((w) => w.code === "dormant_seeding" && w.audience === "homeowner");
     expect(homeowner?.message).toMatch(/April 1/);
   });
@@ -215,5 +217,7 @@ describe("establishment watering and the frost (issue 12, item 10)", () => {
     const plan = planFor(withChanges({ visit: careOnly("2026-10-20", ["fertiliser_only"]), property: { expectedFirstFrost: "2026-10-10" } }));
     expect(water(plan.steps)).toEqual([]);
     expect(addDays("2026-10-10", 14)).toBe(plan.meta.season?.noWatering[0]?.start);
+    // Nothing left to water this year, so nothing to measure either.
+    expect(plan.steps.some((s) => s.key === "note:catch_can_test")).toBe(false);
   });
 });

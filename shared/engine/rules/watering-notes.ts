@@ -1,4 +1,5 @@
 import type { PlanContext } from "../context.ts";
+import { inRanges } from "./season.ts";
 import { formatNumber } from "../format.ts";
 import { oneOffKey } from "../step-keys.ts";
 import type { Why } from "../tables/provenance.ts";
@@ -48,15 +49,18 @@ export function wateringNotes(ctx: PlanContext): PlanStep[] {
       cautions: [],
     });
   }
-  // Minutes per cycle rest on a guessed rate until the homeowner measures it.
-  if (!ctx.precipitationRateMeasured && ctx.input.property.irrigation.kind !== "none") {
+  // Minutes per cycle rest on a guessed rate until the homeowner measures it: asked the day after
+  // the visit (when the soil warms, for seed lying dormant), and not once the frost has ended watering.
+  const measureDay = Math.max(1, ctx.season.sowingStartDay);
+  const watersAfter = (ctx.frostDay === null || measureDay < ctx.frostDay) && inRanges(measureDay, ctx.season.wateringClosed) === null;
+  if (!ctx.precipitationRateMeasured && ctx.input.property.irrigation.kind !== "none" && watersAfter) {
     notes.push({
       key: oneOffKey("note", "catch_can_test"),
-      date: ctx.dateOf(1),
-      phase: ctx.phaseOf(1),
+      date: ctx.dateOf(measureDay),
+      phase: ctx.phaseOf(measureDay),
       kind: "note",
       title: "Measure how much water your sprinkler puts down",
-      detail: `Set ${CATCH_CAN_TEST.cans} straight-sided cups or cans across one watered area, run it for ${CATCH_CAN_TEST.minutes} minutes, and note the millilitres in each. Send us the numbers and we will set exact minutes. Until then the plan assumes ${assumedRatePhrase(ctx)}.`,
+      detail: `Set ${CATCH_CAN_TEST.cans} straight-sided cups or cans across one watered area, run it for ${CATCH_CAN_TEST.minutes} minutes, and note the milliliters in each. Send us the numbers and we will set exact minutes. Until then the plan assumes ${assumedRatePhrase(ctx)}.`,
       why: catchCanWhy,
       cautions: [],
     });
