@@ -32,10 +32,12 @@ test("a homeowner signs out on every device from Settings, after confirming", as
 
 test("the audit log reads as sentences and filters by kind", async ({ page }) => {
   await signInStaff(page, "dana@cobblefield.example");
-  const list = await page.request.get("/api/customers");
+  const list = await page.request.get("/api/customers?q=Cobble Row");
   const { customers } = (await list.json()) as { customers: { id: number; firstName: string }[] };
-  const hana = customers.find((c) => c.firstName === "Hana")!;
-  await page.request.get(`/api/customers/${hana.id}`);
+  const hana = customers.find((c) => c.firstName === "Hana");
+  expect(hana, "the seeded homeowner at 19 Cobble Row").toBeDefined();
+  // Opening her record is what the log should tell in words.
+  expect((await page.request.get(`/api/customers/${hana!.id}`)).ok()).toBe(true);
 
   await page.goto("/staff/audit");
   await expect(page.getByRole("heading", { level: 1, name: "Audit log" })).toBeVisible();
