@@ -54,7 +54,8 @@ export function StaffLayout() {
           <>
             <span className="text-ink-soft">{user.name}</span>
             <SignOutButton />
-            <SignOutEverywhereButton />
+            {/* Staff only: in the narrow header a homeowner who strayed here sees, the plain sign-out is enough. */}
+            {isStaff && <SignOutEverywhereButton />}
           </>
         ) : undefined
       }
