@@ -87,7 +87,27 @@ export function checkAccess(access: Access, user: SessionUser | undefined): asse
  * Mounts route specs on a router. Handlers return the response body (sent as JSON with 200,
  * or the status they set), or undefined after sending the response themselves.
  */
-export type AuditEntry = { user: SessionUser; action: string; subjectId: string | null; method: string; path: string; ip: string | undefined };
+export type AuditEntry = {
+  user: SessionUser;
+  action: string;
+  subjectId: string | null;
+  method: string;
+  path: string;
+  ip: string | undefined;
+  /** What a handler added so the entry still reads well once the record is gone (a deleted place's name). */
+  detail?: Record<string, string | number>;
+};
+
+/**
+ * A handler that creates its record (no id in the path yet) names it here, so the audit entry
+ * points at what was made; `detail` keeps words the record may not outlive.
+ */
+export function auditSubject(res: Response, subjectId: string | number, detail?: Record<string, string | number>): void {
+  res.locals.auditSubjectId = String(subjectId);
+  if (detail) res.locals.auditDetail = detail;
+}
+const auditSubjectOf = (res: Response): string | undefined => res.locals.auditSubjectId as string | undefined;
+const auditDetailOf = (res: Response): Record<string, string | number> | undefined => res.locals.auditDetail as Record<string, string | number> | undefined;
 
 export function buildRouter(specs: readonly RouteSpec[], options: { audit?: (entry: AuditEntry) => void } = {}): Router {
   const router = Router();
@@ -101,8 +121,8 @@ export function buildRouter(specs: readonly RouteSpec[], options: { audit?: (ent
         // Only what actually happened is recorded: refused or failed requests are not reads or changes.
         res.on("finish", () => {
           if (res.statusCode >= 400) return;
-          const subjectId = Object.values(req.params)[0];
-          record({ user, action, subjectId: subjectId === undefined ? null : String(subjectId), method: req.method, path: req.originalUrl, ip: req.ip });
+          const subjectId = auditSubjectOf(res) ?? Object.values(req.params)[0];
+          record({ user, action, subjectId: subjectId === undefined ? null : String(subjectId), method: req.method, path: req.originalUrl, ip: req.ip, detail: auditDetailOf(res) });
         });
       }
       const ctx = {

@@ -117,10 +117,13 @@ describe("authorization matrix, generated from the route table", () => {
 
   const callers: Caller[] = ["signedOut", "customerOwn", "customerOther", "technician", "manager", "deactivated"];
   it("answers every route as the matrix says for every kind of caller", async () => {
-    // Sign-out last: it ends the session the other rows need.
-    const routes = routeTable().sort((a, b) => Number(a.endsWith("sign-out")) - Number(b.endsWith("sign-out")));
+    // Sign-out last (everywhere first, while the session still lives): they end the session the other rows need.
+    const signOutRank = (key: string) => (key.endsWith("/sign-out") ? 2 : key.includes("/sign-out") ? 1 : 0);
+    const routes = routeTable().sort((a, b) => signOutRank(a) - signOutRank(b));
     const mismatches: string[] = [];
     for (const caller of callers) {
+      // customerOwn's "sign out everywhere" ended this same homeowner's other session too.
+      if (caller === "customerOther") agents.customerOther = await signInCustomer(ctx, "ruth.okonkwo@mail.example");
       for (const key of routes) {
         const [method, path] = key.split(" ") as [string, string];
         const url = fillPath(path, caller);

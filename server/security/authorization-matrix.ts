@@ -36,6 +36,8 @@ export const authorizationMatrix: Record<string, MatrixRow> = {
   "POST /api/auth/link": publicRoute,
   "POST /api/auth/link/consume": publicRoute,
   "POST /api/auth/sign-out": publicRoute,
+  // Ends the caller's own sessions only; there is nobody else's record to reach.
+  "POST /api/auth/sign-out-everywhere": anyoneSignedIn,
   "GET /api/dev/outbox": staffOnly,
   "GET /api/my/properties": customerOnly,
   "GET /api/properties/:id": ownRecordOrStaff,

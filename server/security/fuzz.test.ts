@@ -58,8 +58,10 @@ const stackTrace = /\n\s+at [^\n]+:\d+:\d+/;
 
 const routeTable = () =>
   collectRoutes({ config: ctx.config, db: ctx.db, messenger: createMessenger(ctx.config), log: () => {} })
-    // Sign-out last, so it does not end the sessions the other routes are fuzzed with.
-    .sort((a, b) => Number(a.path.endsWith("sign-out")) - Number(b.path.endsWith("sign-out")));
+    // Sign-out (everywhere, then here) last, so it does not end the sessions the other routes are fuzzed with.
+    .sort((a, b) => signOutRank(a.path) - signOutRank(b.path));
+
+const signOutRank = (path: string) => (path.endsWith("/sign-out") ? 2 : path.includes("/sign-out") ? 1 : 0);
 
 function problemOf(res: request.Response): string | undefined {
   const text = res.text ?? "";

@@ -15,10 +15,11 @@ export { LoadingState, ErrorState, EmptyState, type ErrorStateProps, type EmptyS
 export { LinkifiedText, safeHttpUrl, splitLinks, type TextPart } from "./linkified-text.tsx";
 export { SproutMark } from "./sprout-mark.tsx";
 export { meQueryKey, meQueryOptions, getMe, useMe, useSignedInUser, firstName } from "./session/get-me.ts";
-export { useSignOut } from "./session/sign-out.ts";
+export { useSignOut, useSignOutEverywhere } from "./session/sign-out.ts";
 export { RequireSignIn, type RequireSignInProps } from "./session/require-sign-in.tsx";
 export { roleLabel } from "./role-label.ts";
 export { SignOutButton } from "./session/sign-out-button.tsx";
+export { SignOutEverywhereButton, type SignOutEverywhereWords } from "./session/sign-out-everywhere-button.tsx";
 export { NotFoundPage, RouteErrorPage } from "./route-error.tsx";
 export { Dialog, type DialogProps } from "./dialog.tsx";
 export { ConfirmDialog, type ConfirmDialogProps } from "./confirm-dialog.tsx";

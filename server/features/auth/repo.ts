@@ -43,3 +43,23 @@ export async function tokenState(db: Db, tokenHash: string): Promise<"unknown" |
   if (!row) return "unknown";
   return row.used_at ? "used" : "expired";
 }
+
+/**
+ * Ends every session of one person, the current one included. Matches the expression of
+ * `sessions_user_idx`, so it finds them without reading the whole table.
+ */
+export async function endAllSessions(db: Db, userId: number): Promise<number> {
+  return db("sessions").whereRaw("(sess -> 'passport' ->> 'user') = ?", [String(userId)]).delete();
+}
+
+/**
+ * Unused sign-in links of one person stop working now. They read as expired afterwards,
+ * which tells the homeowner what to do: ask for a new one.
+ */
+export async function retireUnusedTokens(db: Db, userId: number): Promise<void> {
+  await db("sign_in_tokens")
+    .where({ user_id: userId })
+    .whereNull("used_at")
+    .andWhere("expires_at", ">", db.fn.now())
+    .update({ expires_at: db.fn.now() });
+}

@@ -3,7 +3,7 @@ import type { PassportStatic } from "passport";
 import { signInLinkConsumeSchema, signInLinkRequestSchema, type CurrentUser } from "#shared/schemas/auth";
 import { route, type RouteSpec } from "../../http/route.ts";
 import { HttpError } from "../../http/errors.ts";
-import { companyName, consumeSignInLink, requestSignInLink, type SignInDeps } from "./service.ts";
+import { companyName, consumeSignInLink, requestSignInLink, signOutEverywhere, type SignInDeps } from "./service.ts";
 import { findActiveUserById } from "../../auth/users-repo.ts";
 import type { SessionUser } from "../../auth/session-user.ts";
 import type { GoogleRefusal } from "../../auth/passport.ts";
@@ -60,6 +60,20 @@ export function authRoutes(deps: SignInDeps): RouteSpec[] {
       access: "public",
       handler: async ({ req, res }) => {
         if (req.user) await logOut(req);
+        res.clearCookie("sproutline.sid", { path: "/" });
+        res.status(204).end();
+      },
+    }),
+    route({
+      method: "post",
+      path: "/api/auth/sign-out-everywhere",
+      access: "signed_in",
+      // Recorded for staff only (buildRouter), so a manager can see when an account was locked down.
+      audit: "account.signed_out_everywhere",
+      handler: async ({ req, res, user }) => {
+        await signOutEverywhere(deps.db, user.id);
+        // The row is already gone; dropping the in-memory session stops express-session saving it back.
+        await new Promise<void>((resolve, reject) => req.session.destroy((e) => (e ? reject(e) : resolve())));
         res.clearCookie("sproutline.sid", { path: "/" });
         res.status(204).end();
       },

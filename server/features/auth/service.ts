@@ -42,6 +42,8 @@ export async function requestSignInLink(deps: SignInDeps, rawContact: string, ip
   if (!user) return;
   const token = newSignInToken();
   const minutes = deps.config.SIGN_IN_LINK_MINUTES;
+  // Only the newest link works: an older one left in an inbox or a forwarded text cannot sign in.
+  await repo.retireUnusedTokens(deps.db, user.id);
   await repo.insertToken(deps.db, { userId: user.id, tokenHash: hashToken(token), channel: contact.email ? "email" : "sms", minutes });
   const url = new URL(`/portal/sign-in/verify?token=${token}`, deps.config.PUBLIC_URL);
   if (next) url.searchParams.set("next", next);
@@ -71,6 +73,17 @@ export async function consumeSignInLink(db: Db, token: string): Promise<number> 
   if (state === "used") throw new HttpError(410, "link_used", "This sign-in link has already been used. Ask for a new one.");
   if (state === "expired") throw new HttpError(410, "link_expired", "This sign-in link has expired. Ask for a new one.");
   throw new HttpError(400, "link_invalid", "This sign-in link is not valid. Ask for a new one.");
+}
+
+/**
+ * "Sign out everywhere": every session of this person ends, this one included, and links
+ * not yet used are retired too, since a link in a lost phone's inbox is a session waiting to start.
+ */
+export async function signOutEverywhere(db: Db, userId: number): Promise<void> {
+  await db.transaction(async (trx) => {
+    await repo.endAllSessions(trx, userId);
+    await repo.retireUnusedTokens(trx, userId);
+  });
 }
 
 export { companyName };

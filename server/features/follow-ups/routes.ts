@@ -4,7 +4,7 @@ import { planIdParamsSchema } from "#shared/schemas/plans";
 import type { Role } from "#shared/schemas/auth";
 import type { Db } from "../../db.ts";
 import { notFound } from "../../http/errors.ts";
-import { route, type RouteSpec } from "../../http/route.ts";
+import { auditSubject, route, type RouteSpec } from "../../http/route.ts";
 import { findPlanForUser } from "../plans/access.ts";
 import { followUpsCsv } from "./csv.ts";
 import { askForAnotherDay, confirmVisit, visitsOfPlan } from "./homeowner.ts";
@@ -60,8 +60,10 @@ export function followUpRoutes(db: Db): RouteSpec[] {
       audit: "follow_up.created",
       body: createFollowUpSchema,
       handler: async ({ user, body, res }) => {
+        const followUp = await createFollowUp(db, user, body);
+        auditSubject(res, followUp.id);
         res.status(201);
-        return { followUp: await createFollowUp(db, user, body) };
+        return { followUp };
       },
     }),
     route({

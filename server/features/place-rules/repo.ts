@@ -51,8 +51,10 @@ export async function updatePlace(db: Db, companyId: number, userId: number, id:
   return count > 0;
 }
 
-export async function deletePlace(db: Db, companyId: number, id: number): Promise<boolean> {
-  return (await db("place_rules").where({ company_id: companyId, id }).delete()) > 0;
+/** The deleted place's name (for the audit log, which outlives it), or undefined when there was none. */
+export async function deletePlace(db: Db, companyId: number, id: number): Promise<string | undefined> {
+  const rows = await db("place_rules").where({ company_id: companyId, id }).delete().returning<{ name: string }[]>("name");
+  return rows[0]?.name;
 }
 
 /**

@@ -1,6 +1,6 @@
 import { placeIdParamsSchema, savePlaceSchema } from "#shared/schemas/place-rules";
 import type { Db } from "../../db.ts";
-import { route, type RouteSpec } from "../../http/route.ts";
+import { auditSubject, route, type RouteSpec } from "../../http/route.ts";
 import * as repo from "./repo.ts";
 import { createPlace, deletePlace, updatePlace } from "./service.ts";
 
@@ -23,8 +23,10 @@ export function placeRuleRoutes(db: Db): RouteSpec[] {
       audit: "place.created",
       body: savePlaceSchema,
       handler: async ({ user, body, res }) => {
+        const place = await createPlace(db, user, body);
+        auditSubject(res, place.id, { name: place.name });
         res.status(201);
-        return { place: await createPlace(db, user, body) };
+        return { place };
       },
     }),
     route({
@@ -42,7 +44,9 @@ export function placeRuleRoutes(db: Db): RouteSpec[] {
       access: managerOnly,
       audit: "place.deleted",
       params: placeIdParamsSchema,
-      handler: async ({ user, params }) => deletePlace(db, user, params.id),
+      handler: async ({ user, params, res }) => {
+        auditSubject(res, params.id, { name: await deletePlace(db, user, params.id) });
+      },
     }),
   ];
 }

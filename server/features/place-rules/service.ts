@@ -24,6 +24,9 @@ export async function updatePlace(db: Db, user: SessionUser, id: number, place: 
   return (await repo.findPlace(db, user.companyId, id))!;
 }
 
-export async function deletePlace(db: Db, user: SessionUser, id: number) {
-  if (!(await repo.deletePlace(db, user.companyId, id))) throw notFound("That place");
+/** Returns the name the place had. */
+export async function deletePlace(db: Db, user: SessionUser, id: number): Promise<string> {
+  const name = await repo.deletePlace(db, user.companyId, id);
+  if (name === undefined) throw notFound("That place");
+  return name;
 }

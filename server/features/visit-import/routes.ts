@@ -1,7 +1,7 @@
 import { batchIdParamSchema } from "#shared/schemas/visit-import";
 import type { Db } from "../../db.ts";
 import { notFound } from "../../http/errors.ts";
-import { route, type RouteSpec } from "../../http/route.ts";
+import { auditSubject, route, type RouteSpec } from "../../http/route.ts";
 import type { PlanChangeHook } from "../plans/service.ts";
 import { batchStatus } from "./repo.ts";
 import { previewImport, runImport } from "./service.ts";
@@ -36,7 +36,12 @@ export function visitImportRoutes(db: Db, onChange?: PlanChangeHook): RouteSpec[
       access: managerOnly,
       audit: "customers.imported",
       before: [accessBeforeUpload(managerOnly), csvUpload()],
-      handler: async ({ req, user }) => runImport(db, user, uploadedCsv(req), onChange),
+      handler: async ({ req, res, user }) => {
+        const result = await runImport(db, user, uploadedCsv(req), onChange);
+        // The file's batch is the record; how many visits it made is what a reader of the log wants.
+        auditSubject(res, result.batchId, { created: result.created, total: result.total });
+        return result;
+      },
     }),
     route({
       method: "get",

@@ -2,7 +2,7 @@ import { idParamSchema } from "#shared/schemas/properties";
 import { logVisitSchema, moveVisitSchema } from "#shared/schemas/visits";
 import type { AppDeps } from "../../app.ts";
 import { notFound } from "../../http/errors.ts";
-import { route, type RouteSpec } from "../../http/route.ts";
+import { auditSubject, route, type RouteSpec } from "../../http/route.ts";
 import { findInCompany, mergeLawnFacts } from "../properties/repo.ts";
 import { createPlanForVisit, regeneratePlan, type PlanChangeHook } from "../plans/service.ts";
 import { planIdOfVisit } from "../plans/plans-repo.ts";
@@ -18,6 +18,7 @@ export function visitRoutes(deps: AppDeps, onChange?: PlanChangeHook): RouteSpec
       method: "post",
       path: "/api/visits",
       access: staff,
+      audit: "visit.logged",
       body: logVisitSchema,
       handler: async ({ user, body, res }) => {
         const property = await findInCompany(db, user.companyId, body.propertyId);
@@ -46,6 +47,7 @@ export function visitRoutes(deps: AppDeps, onChange?: PlanChangeHook): RouteSpec
           deps.log(`welcome for plan ${created.planId} could not be queued`, err);
           return [];
         });
+        auditSubject(res, created.visitId);
         res.status(201).json({ ...created, invitationSent: welcomeChannels.length > 0, welcomeChannels });
       },
     }),

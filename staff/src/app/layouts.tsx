@@ -1,6 +1,6 @@
 import { Link, Outlet, useNavigation } from "react-router-dom";
 import { staffRoles, type CurrentUser } from "#shared/schemas/auth";
-import { AppShell, LoadingState, Page, RequireRole, SignOutButton, buttonClasses, useMe, type NavItem } from "#shared/ui/index";
+import { AppShell, LoadingState, Page, RequireRole, SignOutButton, SignOutEverywhereButton, buttonClasses, useMe, type NavItem } from "#shared/ui/index";
 import { useOutboxAvailable } from "../features/outbox/api/get-outbox.ts";
 import { productLabel } from "./product.ts";
 
@@ -54,6 +54,8 @@ export function StaffLayout() {
           <>
             <span className="text-ink-soft">{user.name}</span>
             <SignOutButton />
+            {/* Staff only: in the narrow header a homeowner who strayed here sees, the plain sign-out is enough. */}
+            {isStaff && <SignOutEverywhereButton />}
           </>
         ) : undefined
       }

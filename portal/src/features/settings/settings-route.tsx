@@ -8,6 +8,7 @@ import { CalendarFeed } from "./components/calendar-feed.tsx";
 import { ContactForm } from "./components/contact-form.tsx";
 import { DisplayChoices } from "./components/display-choices.tsx";
 import { ReminderForm } from "./components/reminder-form.tsx";
+import { SignOutEverywhere } from "./components/sign-out-everywhere.tsx";
 
 export function SettingsRoute() {
   const { t } = useTranslation();
@@ -47,7 +48,10 @@ export function SettingsRoute() {
       </Section>
 
       <Section title={t("settings.account.heading")}>
-        <PortalSignOutButton />
+        <div className="flex flex-col items-start gap-5">
+          <PortalSignOutButton />
+          <SignOutEverywhere />
+        </div>
       </Section>
     </Page>
   );

@@ -19,7 +19,7 @@ export function AuditLogRoute() {
   };
 
   return (
-    <Page title="Audit log" width="wide" intro="Every time someone on the staff opened or changed a customer's records, newest first.">
+    <Page title="Audit log" width="wide" intro="Every time someone on the staff opened or changed a customer's records, the team or the company's rules, newest first.">
       <div className="flex flex-col gap-5">
         <AuditFilterForm key={params.toString()} filter={filter} onChange={setFilter} />
         {audit.isError && <ErrorState title="The audit log didn't load" error={audit.error} onRetry={() => void audit.refetch()} retrying={audit.isFetching} />}

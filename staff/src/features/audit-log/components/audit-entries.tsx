@@ -1,36 +1,26 @@
 import { roleLabel } from "#shared/ui/index";
 import type { Role } from "#shared/schemas/auth";
 import type { AuditEntry } from "../api/get-audit.ts";
-import { actionLabel, formatWhen, subjectName } from "../lib/labels.ts";
+import { formatWhen, subjectName } from "../lib/labels.ts";
 
-/** One line per read or change: who, what, which record, when, from where. */
+/** One line per read or change, as a sentence: who did what for whom; when, the record and where from beneath. */
 export function AuditEntries({ entries }: { entries: AuditEntry[] }) {
   return (
     <ol className="flex flex-col divide-y divide-line rounded-xl border border-line bg-surface">
       {entries.map((entry) => (
-        <li key={entry.id} className="grid gap-1 p-3 md:grid-cols-[12rem_minmax(0,1fr)_minmax(0,1fr)] md:gap-4">
-          <time dateTime={entry.at} className="text-ink-soft">
-            {formatWhen(entry.at)}
-          </time>
-          <div className="min-w-0">
-            <p className="font-semibold">{actionLabel(entry.action)}</p>
+        <li key={entry.id} className="flex flex-col gap-1 p-3">
+          <p className="font-semibold">{entry.sentence}</p>
+          <p className="flex flex-wrap gap-x-3 text-sm text-ink-soft">
+            <time dateTime={entry.at}>{formatWhen(entry.at)}</time>
+            {entry.actorRole && <span>{roleLabel(entry.actorRole as Role)}</span>}
             {entry.subjectType && (
-              <p className="text-ink-soft">
+              <span>
                 {subjectName(entry.subjectType)}
                 {entry.subjectId && ` #${entry.subjectId}`}
-              </p>
+              </span>
             )}
-          </div>
-          <div className="min-w-0">
-            <p>
-              {entry.actorName ?? "Someone no longer on file"}
-              {entry.actorRole && <span className="text-ink-soft"> · {roleLabel(entry.actorRole as Role)}</span>}
-            </p>
-            <p className="truncate font-mono text-sm text-ink-soft" title={entry.path ?? undefined}>
-              {[entry.method, entry.path].filter(Boolean).join(" ")}
-              {entry.ip && ` · ${entry.ip}`}
-            </p>
-          </div>
+            {entry.ip && <span>from {entry.ip}</span>}
+          </p>
         </li>
       ))}
     </ol>

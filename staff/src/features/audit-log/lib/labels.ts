@@ -1,36 +1,24 @@
-/** Audit actions in words; an action added later shows as its code rather than disappearing. */
-const actionLabels: Record<string, string> = {
-  "plan.read": "Opened a care plan",
-  "plan.regenerated": "Regenerated a care plan",
-  "plan.step_state_changed": "Changed a step's state",
-  "plan.observation_added": "Recorded an observation",
-  "plan.question_answered": "Answered a question",
-  "plan.thread_read": "Read a question thread",
-  "customer.read": "Opened a customer",
-  "customers.imported": "Imported visits from a file",
-  "property.read": "Opened a lawn",
-  "visit.moved": "Moved a visit",
-  "follow_up.created": "Booked a follow-up visit",
-  "follow_up.updated": "Changed a follow-up visit",
-  "unmatched_inbound.read": "Read the unmatched messages",
-  "unmatched_inbound.handled": "Marked an unmatched message handled",
-  "place.created": "Added a place's rules",
-  "place.updated": "Changed a place's rules",
-  "place.deleted": "Deleted a place's rules",
-};
-export const actionLabel = (action: string) => actionLabels[action] ?? action;
+import { auditSubjectTypes, type AuditSubjectType } from "#shared/schemas/audit";
 
-export const subjectTypes = [
-  { value: "plan", label: "Care plans" },
-  { value: "customer", label: "Customers" },
-  { value: "property", label: "Lawns" },
-  { value: "visit", label: "Visits" },
-  { value: "follow_up", label: "Follow-up visits" },
-  { value: "customers", label: "Imports" },
-  { value: "place", label: "Places" },
-];
-const subjectNames: Record<string, string> = { plan: "Care plan", customer: "Customer", property: "Lawn", visit: "Visit", follow_up: "Follow-up", customers: "Import", place: "Place" };
-export const subjectName = (type: string | null) => (type ? (subjectNames[type] ?? type) : "");
+/** One filter choice per kind of record; typed by the shared list, so a new kind can't be left out. */
+const subjectLabels: Record<AuditSubjectType, { plural: string; one: string }> = {
+  plan: { plural: "Care plans", one: "Care plan" },
+  visit: { plural: "Visits", one: "Visit" },
+  follow_up: { plural: "Follow-up visits", one: "Follow-up" },
+  question: { plural: "Questions", one: "Question" },
+  customer: { plural: "Customers", one: "Customer" },
+  property: { plural: "Lawns", one: "Lawn" },
+  customers: { plural: "Imports", one: "Import" },
+  program: { plural: "Care programs", one: "Program" },
+  place: { plural: "Places", one: "Place" },
+  team: { plural: "Team changes", one: "Team member" },
+  unmatched_inbound: { plural: "Unmatched messages", one: "Unmatched message" },
+  account: { plural: "Sign-outs everywhere", one: "Account" },
+};
+
+export const subjectTypes = auditSubjectTypes.map((value) => ({ value, label: subjectLabels[value].plural }));
+
+export const subjectName = (type: string | null) => (type ? (subjectLabels[type as AuditSubjectType]?.one ?? type) : "");
 
 const when = new Intl.DateTimeFormat("en-US", { dateStyle: "medium", timeStyle: "short" });
 export const formatWhen = (iso: string) => when.format(new Date(iso));
