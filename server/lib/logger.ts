@@ -1,0 +1,71 @@
+import { pino, type DestinationStream, type Level, type Logger } from "pino";
+
+export type { Logger } from "pino";
+
+/*
+ * One logger for every long-running process (server, reminder worker, inbound e-mail): JSON lines
+ * an operator's tools can read, one per event, each naming its process. Under `npm run dev` and
+ * `npm start` (NODE_ENV=development) the same lines are pretty-printed by pino-pretty in a worker
+ * thread, prefixed "[server]", "[worker]"… as the hand-written lines were. Tests stay quiet unless
+ * they ask (LOG_LEVEL).
+ */
+const LEVELS: readonly string[] = ["fatal", "error", "warn", "info", "debug", "trace", "silent"];
+
+export function logLevelFrom(env: NodeJS.ProcessEnv): Level | "silent" {
+  const wanted = env.LOG_LEVEL?.trim().toLowerCase();
+  if (wanted && LEVELS.includes(wanted)) return wanted as Level | "silent";
+  return env.NODE_ENV === "test" ? "silent" : "info";
+}
+
+/** Values that must never reach a log line, wherever a caller happens to put them. */
+export const REDACTED_PATHS = [
+  "req.headers.cookie",
+  "req.headers.authorization",
+  'res.headers["set-cookie"]',
+  "*.email",
+  "*.phone",
+  "*.token",
+  "*.password",
+  "*.contact",
+];
+
+export type LoggerOptions = {
+  env?: NodeJS.ProcessEnv;
+  /** Where lines go instead of standard output (tests capture them). */
+  destination?: DestinationStream;
+  level?: Level | "silent";
+};
+
+export function createLogger(name: string, options: LoggerOptions = {}): Logger {
+  const env = options.env ?? process.env;
+  const level = options.level ?? logLevelFrom(env);
+  const base = { level, base: { name }, redact: { paths: REDACTED_PATHS, censor: "[redacted]" } };
+  if (options.destination) return pino(base, options.destination);
+  const pretty = (env.NODE_ENV ?? "development") === "development" && env.LOG_FORMAT !== "json";
+  if (pretty) {
+    return pino({
+      ...base,
+      transport: {
+        target: "pino-pretty",
+        options: { colorize: true, translateTime: "SYS:HH:MM:ss", ignore: "pid,hostname,name", messageFormat: `[${name}] {msg}` },
+      },
+    });
+  }
+  // Asynchronous writes: a burst of requests never waits on the terminal or the log collector;
+  // pino flushes what is buffered when the process exits.
+  return pino(base, pino.destination({ dest: 1, sync: false }));
+}
+
+/**
+ * The (message, error?) callback the features already take (dispatcher, listener, audit): an
+ * error is logged with its stack at "error", a plain message at "info".
+ */
+export type ProcessLog = (message: string, err?: unknown) => void;
+
+export function logFunction(logger: Logger): ProcessLog {
+  return (message, err) => {
+    if (err === undefined || err === null) logger.info(message);
+    else if (err instanceof Error) logger.error({ err }, message);
+    else logger.error({ detail: String(err) }, message);
+  };
+}
