@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import request from "supertest";
-import { createLogger } from "../lib/logger.ts";
+import { createLogger, logLevelFrom } from "../lib/logger.ts";
+import { loggablePath } from "./request-log.ts";
 import { createTestContext, forgetSignInRequests, freshIp, tokenFromLink, waitForMessage, type TestContext } from "../test/harness.ts";
 
 // Every line the app logs, as written (JSON text), so a test can look for secrets anywhere in it.
@@ -29,7 +30,7 @@ async function lineOf(requestId: string): Promise<Line> {
 describe("request ids", () => {
   it("gives a request one id: in its log line, its response header and its error answer", async () => {
     const res = await request(ctx.app).get("/api/no-such-thing").expect(404);
-    const id = res.headers["x-request-id"];
+    const id = String(res.headers["x-request-id"]);
     expect(id).toMatch(/^[0-9a-f-]{36}$/);
     expect(res.body.error).toMatchObject({ code: "not_found", requestId: id });
     const line = await lineOf(id);
@@ -78,7 +79,7 @@ describe("what a request line never holds", () => {
     await request(ctx.app).get("/calendar/secret-calendar-token-789.ics").expect(404);
     await request(ctx.app).get("/api/unsubscribe/email?c=1&t=secret-unsubscribe-token-0123456789").expect(404);
 
-    const meLine = await lineOf(me.headers["x-request-id"]);
+    const meLine = await lineOf(String(me.headers["x-request-id"]));
     expect(meLine).toMatchObject({ userId: me.body.user.id, role: "customer", req: { path: "/api/me" } });
     const linkLine = lines().find((l) => l.req?.path.startsWith("/portal/sign-in/verify"));
     expect(linkLine?.req?.path).toBe("/portal/sign-in/verify?[redacted]");
@@ -100,5 +101,28 @@ describe("what a request line never holds", () => {
     ]) {
       expect(everything, `the log holds ${secret}`).not.toContain(secret);
     }
+  });
+});
+
+describe("the logger itself", () => {
+  it("censors contact details and secrets a caller puts in a line by mistake", () => {
+    const own: string[] = [];
+    const careless = createLogger("worker", { level: "info", destination: { write: (line: string) => void own.push(line) } });
+    careless.info({ customer: { email: "pat@mail.example", phone: "+13305550188" }, link: { token: "tok-secret-42" } }, "sent");
+    const line = JSON.parse(own[0]!) as { name: string; customer: { email: string; phone: string }; link: { token: string } };
+    expect(line).toMatchObject({ name: "worker", customer: { email: "[redacted]", phone: "[redacted]" }, link: { token: "[redacted]" } });
+  });
+
+  it("keeps paths readable and drops query strings and the calendar feed's secret", () => {
+    expect(loggablePath("/api/plans/12/steps")).toBe("/api/plans/12/steps");
+    expect(loggablePath("/auth/google/callback?code=abc&state=def")).toBe("/auth/google/callback?[redacted]");
+    expect(loggablePath("/calendar/abcdefghijklmnop.ics")).toBe("/calendar/[redacted]");
+  });
+
+  it("reads its level from LOG_LEVEL, silent under test and info otherwise", () => {
+    expect(logLevelFrom({ NODE_ENV: "test" })).toBe("silent");
+    expect(logLevelFrom({ NODE_ENV: "production" })).toBe("info");
+    expect(logLevelFrom({ NODE_ENV: "test", LOG_LEVEL: "Debug" })).toBe("debug");
+    expect(logLevelFrom({ NODE_ENV: "production", LOG_LEVEL: "loud" })).toBe("info");
   });
 });

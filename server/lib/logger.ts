@@ -47,13 +47,21 @@ export function createLogger(name: string, options: LoggerOptions = {}): Logger 
       ...base,
       transport: {
         target: "pino-pretty",
-        options: { colorize: true, translateTime: "SYS:HH:MM:ss", ignore: "pid,hostname,name", messageFormat: `[${name}] {msg}` },
+        // A request on one line: its fields go into the message instead of a block below it.
+        options: {
+          destination: 2, // standard error, as below
+          colorize: !env.NO_COLOR,
+          translateTime: "SYS:HH:MM:ss",
+          ignore: "pid,hostname,name,req,res,requestId,responseTime,userId,role",
+          messageFormat: `[${name}] {msg}{if responseTime} {responseTime} ms{end}{if userId} user {userId} {role}{end}{if requestId} {requestId}{end}`,
+        },
       },
     });
   }
+  // Standard error, where these processes always wrote (test stacks ignore standard output).
   // Asynchronous writes: a burst of requests never waits on the terminal or the log collector;
   // pino flushes what is buffered when the process exits.
-  return pino(base, pino.destination({ dest: 1, sync: false }));
+  return pino(base, pino.destination({ dest: 2, sync: false }));
 }
 
 /**
