@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import request from "supertest";
-import { createLogger, logLevelFrom } from "../lib/logger.ts";
+import { createLogger, logFunction, logLevelFrom } from "../lib/logger.ts";
 import { loggablePath } from "./request-log.ts";
 import { createTestContext, forgetSignInRequests, freshIp, tokenFromLink, waitForMessage, type TestContext } from "../test/harness.ts";
 
@@ -111,6 +111,20 @@ describe("the logger itself", () => {
     careless.info({ customer: { email: "pat@mail.example", phone: "+13305550188" }, link: { token: "tok-secret-42" } }, "sent");
     const line = JSON.parse(own[0]!) as { name: string; customer: { email: string; phone: string }; link: { token: string } };
     expect(line).toMatchObject({ name: "worker", customer: { email: "[redacted]", phone: "[redacted]" }, link: { token: "[redacted]" } });
+  });
+
+  it("masks addresses and numbers an error quotes, and drops the fields that repeat them", () => {
+    const own: string[] = [];
+    const log = logFunction(createLogger("worker", { level: "info", destination: { write: (line: string) => void own.push(line) } }));
+    const smtp = Object.assign(new Error("Can't send mail - all recipients were rejected: 550 <pat@mail.example>"), { rejected: ["pat@mail.example"] });
+    const pg = Object.assign(new Error("duplicate key value violates unique constraint"), { detail: "Key (phone)=(+13305550188) already exists." });
+    log("sending failed", smtp);
+    log("saving failed", pg);
+    log("a thrown text", "call +1 330 555 0188");
+    const text = own.join("");
+    expect(text).toContain("[e-mail]");
+    expect(text).toContain("all recipients were rejected");
+    for (const secret of ["pat@mail.example", "+13305550188", "330 555 0188"]) expect(text).not.toContain(secret);
   });
 
   it("keeps paths readable and drops query strings and the calendar feed's secret", () => {

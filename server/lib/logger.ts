@@ -29,6 +29,23 @@ export const REDACTED_PATHS = [
   "*.contact",
 ];
 
+// Errors quote what they failed on: a rejected recipient (SMTP), a duplicate key's value (PostgreSQL's
+// "detail"). Error lines are rare, so masking their text costs nothing on the busy path.
+const EMAIL_IN_TEXT = /[^\s<>()"',;:]+@[^\s<>()"',;:]+\.[A-Za-z]{2,}/g;
+const PHONE_IN_TEXT = /\+?\d[\d ().-]{8,}\d/g;
+const ERROR_FIELDS_DROPPED = ["detail", "response", "rejected", "rejectedErrors", "accepted", "envelope", "parameters", "bindings", "where"];
+
+export function maskContacts(text: string): string {
+  return text.replace(EMAIL_IN_TEXT, "[e-mail]").replace(PHONE_IN_TEXT, "[phone]");
+}
+
+function safeError(err: Error): Record<string, unknown> {
+  const plain = pino.stdSerializers.err(err) as unknown as Record<string, unknown>;
+  for (const key of ERROR_FIELDS_DROPPED) delete plain[key];
+  for (const key of ["message", "stack"]) if (typeof plain[key] === "string") plain[key] = maskContacts(plain[key]);
+  return plain;
+}
+
 export type LoggerOptions = {
   env?: NodeJS.ProcessEnv;
   /** Where lines go instead of standard output (tests capture them). */
@@ -39,7 +56,7 @@ export type LoggerOptions = {
 export function createLogger(name: string, options: LoggerOptions = {}): Logger {
   const env = options.env ?? process.env;
   const level = options.level ?? logLevelFrom(env);
-  const base = { level, base: { name }, redact: { paths: REDACTED_PATHS, censor: "[redacted]" } };
+  const base = { level, base: { name }, redact: { paths: REDACTED_PATHS, censor: "[redacted]" }, serializers: { err: safeError } };
   if (options.destination) return pino(base, options.destination);
   const pretty = (env.NODE_ENV ?? "development") === "development" && env.LOG_FORMAT !== "json";
   if (pretty) {
@@ -73,7 +90,8 @@ export type ProcessLog = (message: string, err?: unknown) => void;
 export function logFunction(logger: Logger): ProcessLog {
   return (message, err) => {
     if (err === undefined || err === null) logger.info(message);
+    // (Messages name records by id; a non-Error thrown value may hold anything.)
     else if (err instanceof Error) logger.error({ err }, message);
-    else logger.error({ detail: String(err) }, message);
+    else logger.error({ thrown: maskContacts(String(err)) }, message);
   };
 }
