@@ -6,6 +6,8 @@ import { createSessionMiddleware } from "./auth/sessions.ts";
 import { createPassport } from "./auth/passport.ts";
 import { userFromSession } from "./auth/request-user.ts";
 import { apiNotFound, errorHandler } from "./http/errors.ts";
+import { requestLogger } from "./http/request-log.ts";
+import { createLogger, type Logger } from "./lib/logger.ts";
 import { securityHeaders } from "./web/security-headers.ts";
 import { compressWherePays } from "./web/compress.ts";
 import { buildRouter } from "./http/route.ts";
@@ -22,6 +24,8 @@ export type AppDeps = {
   db: Db;
   messenger: Messenger;
   log: (message: string, err?: unknown) => void;
+  /** Request lines go here; without one, the process's own "server" logger (silent under test). */
+  logger?: Logger;
 };
 
 export type BuiltApp = { app: Express; close: () => Promise<void> };
@@ -38,6 +42,8 @@ export async function createApp(deps: AppDeps, web: WebMode = "none"): Promise<B
   const app = express();
   app.disable("x-powered-by");
   app.set("trust proxy", config.TRUST_PROXY);
+  // First, so every answer (even a refused one) carries its request id and gets its log line.
+  app.use(requestLogger(deps.logger ?? createLogger("server")));
   app.use(securityHeaders(config.NODE_ENV === "development"));
   app.use("/api", privateApiAnswers());
   app.use(compressWherePays());

@@ -7,14 +7,14 @@
  * several hosts behind the domain's MX records) all work.
  */
 import "dotenv/config";
-import { configOrExit, processLog } from "./lib/process-start.ts";
+import { configOrExit, processLogging } from "./lib/process-start.ts";
 import { createDb } from "./db.ts";
 import { createMessenger } from "./messaging/create-messenger.ts";
 import { photoStorageFromConfig } from "./storage/index.ts";
 import { startInboundSmtp } from "./features/email-replies/listener.ts";
 
-const log = processLog("inbound-email");
-const config = configOrExit(log);
+const { logger, log } = processLogging("inbound-email");
+const config = configOrExit(logger);
 
 const db = createDb(config.DATABASE_URL, { min: 0, max: 5 });
 const tls =

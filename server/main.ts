@@ -5,19 +5,19 @@
  */
 import "dotenv/config";
 import { createServer } from "node:http";
-import { configOrExit, processLog } from "./lib/process-start.ts";
+import { configOrExit, processLogging } from "./lib/process-start.ts";
 import { createDb } from "./db.ts";
 import { createApp, type WebMode } from "./app.ts";
 import { createMessenger } from "./messaging/create-messenger.ts";
 
-const log = processLog("server");
-const config = configOrExit(log);
+const { logger, log } = processLogging("server");
+const config = configOrExit(logger);
 
 const db = createDb(config.DATABASE_URL);
 const messenger = createMessenger(config);
 const webModes: Record<string, WebMode> = { vite: "vite", none: "none" };
 const web: WebMode = webModes[process.env.SERVE_APPS ?? ""] ?? "built";
-const { app, close } = await createApp({ config, db, messenger, log }, web);
+const { app, close } = await createApp({ config, db, messenger, log, logger }, web);
 const server = createServer(app);
 server.listen(config.PORT, "127.0.0.1", () => {
   log(`listening on http://127.0.0.1:${config.PORT} (${config.NODE_ENV}, apps: ${web})`);

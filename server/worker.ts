@@ -11,7 +11,7 @@
  */
 import "dotenv/config";
 import PgBoss from "pg-boss";
-import { configOrExit, processLog } from "./lib/process-start.ts";
+import { configOrExit, processLogging } from "./lib/process-start.ts";
 import { createDb } from "./db.ts";
 import { createMessenger } from "./messaging/create-messenger.ts";
 import { createSmsSender } from "./adapters/sms.ts";
@@ -21,9 +21,9 @@ import { refreshActivePlans } from "./features/reminders/reconcile.ts";
 import { loadReminderSettings } from "./features/reminders/settings.ts";
 import { createSmsLookup } from "./features/reminders/sms-lookup.ts";
 
-const log = processLog("worker");
-const config = configOrExit(log);
-const settings = configOrExit(log, loadReminderSettings);
+const { logger, log } = processLogging("worker");
+const config = configOrExit(logger);
+const settings = configOrExit(logger, loadReminderSettings);
 
 const db = createDb(config.DATABASE_URL, { min: 0, max: Math.min(50, settings.REMINDER_CONCURRENCY + 5) });
 

@@ -115,6 +115,8 @@ export async function startStack(options: StackOptions): Promise<RunningStack> {
   const fakesControlUrl = `http://127.0.0.1:${ports.sms}`;
   const shared = {
     NODE_ENV: options.nodeEnv,
+    // Test stacks log only failures (silent would hide a server error behind a failing browser test).
+    ...(options.nodeEnv === "test" ? { LOG_LEVEL: process.env.LOG_LEVEL ?? "error" } : {}),
     TWILIO_ACCOUNT_SID: "AC5f0a11ce5f0a11ce5f0a11ce5f0a11ce",
     TWILIO_AUTH_TOKEN: "local-fake-auth-token",
     GOOGLE_CLIENT_ID: "sproutline-local-client",

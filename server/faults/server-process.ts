@@ -49,6 +49,8 @@ export async function startServerProcess(options: { clusterName: string; pgPort:
       GOOGLE_AUTH_BASE_URL: fakes.oauthUrl,
       FAKES_CONTROL_URL: fakes.controlUrl,
       SERVE_APPS: "none",
+      // Failures only (the test's default is silent): they explain a failing fault test.
+      LOG_LEVEL: "error",
     },
   });
   let stderr = "";

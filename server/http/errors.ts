@@ -1,5 +1,6 @@
 import type { ErrorRequestHandler, RequestHandler } from "express";
 import type { ZodError } from "zod";
+import { loggablePath } from "./request-log.ts";
 
 /** An error the client should see as-is: status, a stable code, a plain message. */
 export class HttpError extends Error {
@@ -57,9 +58,13 @@ function isDatabaseUnavailable(err: unknown): boolean {
 export function errorHandler(log: (message: string, err: unknown) => void): ErrorRequestHandler {
   return (err, req, res, _next) => {
     if (res.headersSent) return;
+    // The id the request log line carries (server/http/request-log.ts), so a user's report finds its line.
+    const requestId = typeof req.id === "string" ? req.id : undefined;
+    const answer = (status: number, error: { code: string; message: string; fields?: Record<string, string> }) =>
+      res.status(status).json({ error: { ...error, requestId } });
     if (err instanceof HttpError) {
       for (const [name, value] of Object.entries(err.headers ?? {})) res.setHeader(name, value);
-      res.status(err.status).json({ error: { code: err.code, message: err.message, fields: err.fields } });
+      answer(err.status, { code: err.code, message: err.message, fields: err.fields });
       return;
     }
     // body-parser and multer report client mistakes with a status of 4xx.
@@ -67,15 +72,15 @@ export function errorHandler(log: (message: string, err: unknown) => void): Erro
     if (typeof status === "number" && status >= 400 && status < 500) {
       const code = (err as { type?: string }).type === "entity.too.large" ? "payload_too_large" : "bad_request";
       const message = code === "payload_too_large" ? "The request is too large." : "The request could not be read.";
-      res.status(status).json({ error: { code, message } });
+      answer(status, { code, message });
       return;
     }
     if (isDatabaseUnavailable(err)) {
       res.setHeader("Retry-After", "5");
-      res.status(503).json({ error: { code: "unavailable", message: "The service is busy or restarting. Try again in a few seconds." } });
+      answer(503, { code: "unavailable", message: "The service is busy or restarting. Try again in a few seconds." });
       return;
     }
-    log(`unhandled error on ${req.method} ${req.originalUrl}`, err);
-    res.status(500).json({ error: { code: "internal", message: "Something went wrong on our side. Please try again." } });
+    log(`unhandled error on ${req.method} ${loggablePath(req.originalUrl)} (request ${requestId ?? "without id"})`, err);
+    answer(500, { code: "internal", message: "Something went wrong on our side. Please try again." });
   };
 }

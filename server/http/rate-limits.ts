@@ -20,8 +20,9 @@ export function createRateLimit(db: Db, spec: LimitSpec): RateLimitRequestHandle
     store: new PostgresRateLimitStore(db, `${spec.name}:`),
     // A database outage must not turn into refusing everyone or into a 500: let the request on.
     passOnStoreError: true,
-    handler: (_req, res, _next, options) => {
-      res.status(options.statusCode).json({ error: { code: "rate_limited", message: spec.message } });
+    handler: (req, res, _next, options) => {
+      const requestId = typeof req.id === "string" ? req.id : undefined;
+      res.status(options.statusCode).json({ error: { code: "rate_limited", message: spec.message, requestId } });
     },
   });
 }

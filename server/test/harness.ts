@@ -12,6 +12,7 @@ import { createDb, type Db } from "../db.ts";
 import { createMessenger } from "../messaging/create-messenger.ts";
 import { startFakes, type RunningFakes } from "../fakes/index.ts";
 import { fakeOAuthAccounts } from "../../scripts/lib/stack.ts";
+import type { Logger } from "../lib/logger.ts";
 
 export type TestContext = {
   app: BuiltApp["app"];
@@ -22,7 +23,8 @@ export type TestContext = {
   close(): Promise<void>;
 };
 
-export async function createTestContext(env: Record<string, string> = {}): Promise<TestContext> {
+/** `logger`: where request lines go (tests of logging capture them); otherwise silent. */
+export async function createTestContext(env: Record<string, string> = {}, options: { logger?: Logger } = {}): Promise<TestContext> {
   const fakes = await startFakes({ oauth: { accounts: fakeOAuthAccounts } });
   // Notices read their gathering delay from the environment (notices/queue.ts); API tests drain at once.
   process.env.NOTICE_GATHER_SECONDS ??= env.NOTICE_GATHER_SECONDS ?? "0";
@@ -42,7 +44,7 @@ export async function createTestContext(env: Record<string, string> = {}): Promi
   });
   const db = createDb(config.DATABASE_URL);
   const errors: unknown[] = [];
-  const built = await createApp({ config, db, messenger: createMessenger(config), log: (_m, err) => errors.push(err) }, "none");
+  const built = await createApp({ config, db, messenger: createMessenger(config), log: (_m, err) => errors.push(err), logger: options.logger }, "none");
   return {
     app: built.app,
     db,

@@ -6,6 +6,8 @@ export const apiErrorSchema = z.object({
     code: z.string(),
     message: z.string(),
     fields: z.record(z.string(), z.string()).optional(),
+    /** The server's X-Request-Id, to quote when reporting a problem. */
+    requestId: z.string().optional(),
   }),
 });
 export type ApiError = z.infer<typeof apiErrorSchema>;
