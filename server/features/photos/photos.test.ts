@@ -222,7 +222,8 @@ describe("polyglots: a photo that also carries script or markup is refused, noth
     const before = await snapshot();
     const res = await ask(ruth, [upload]).expect(415);
     expect(res.headers["content-type"]).toMatch(/^application\/json/);
-    expect(res.body).toEqual({ error: carriesCode });
+    // Every error answer also names its request, for the logs.
+    expect(res.body).toEqual({ error: { ...carriesCode, requestId: res.headers["x-request-id"] } });
     await expectNothingSavedAndServing(before);
   }
 

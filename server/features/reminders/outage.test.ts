@@ -137,7 +137,7 @@ describe("the worker process through an outage of both providers", () => {
     ctx.fakes.smtp.setDown(true);
     try {
       const worker = startWorker(output);
-      await eventually(async () => /\[worker\].*started: concurrency/.test(output.join("")), 30_000, "the worker to start");
+      await eventually(async () => /"name":"worker".*"msg":"started: concurrency/.test(output.join("")), 30_000, "the worker to start");
 
       // t0: everything falls due while both providers are down.
       await ctx.db("reminders").whereIn("id", ids).update({ next_attempt_at: ctx.db.fn.now() });

@@ -25,6 +25,8 @@ export function workerProcesses(ctx: () => TestContext): WorkerProcesses {
         env: {
           ...process.env,
           NODE_ENV: "test",
+          // The tests read the worker's own lines (started, found at the provider…); tests are otherwise silent.
+          LOG_LEVEL: "info",
           DATABASE_URL: config.DATABASE_URL,
           SESSION_SECRET: config.SESSION_SECRET,
           PUBLIC_URL: config.PUBLIC_URL,
