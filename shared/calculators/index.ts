@@ -13,7 +13,7 @@ export {
   type NpkAnalysis,
   type NutrientAmounts,
   type NutrientsDelivered,
-} from "./fertiliser.ts";
+} from "./fertilizer.ts";
 export {
   CATCH_CAN_CONSTANT,
   openingAreaIn2,

@@ -1,4 +1,4 @@
-import { nutrientsDelivered, totalProduct, type NutrientAmounts } from "../calculators/fertiliser.ts";
+import { nutrientsDelivered, totalProduct, type NutrientAmounts } from "../calculators/fertilizer.ts";
 import { minutesPerCycle } from "../calculators/irrigation.ts";
 import { pureLiveSeed, seedsPerSqFt } from "../calculators/seed.ts";
 import { ft2ToM2, lbPer1000Ft2ToGPerM2, lbToKg } from "../calculators/units.ts";

@@ -1,4 +1,4 @@
-import type { NutrientAmounts } from "../calculators/fertiliser.ts";
+import type { NutrientAmounts } from "../calculators/fertilizer.ts";
 import type { IsoDate } from "./dates.ts";
 import type { CautionId } from "./tables/cautions.ts";
 import type { Provenance, Why } from "./tables/provenance.ts";

@@ -1,4 +1,4 @@
-import { nutrientsDelivered, phosphateFromPhosphorus } from "../../calculators/fertiliser.ts";
+import { nutrientsDelivered, phosphateFromPhosphorus } from "../../calculators/fertilizer.ts";
 import type { PlanContext } from "../context.ts";
 import { formatNumber } from "../format.ts";
 import type { ProductApplied } from "../schemas/plan-input.ts";

@@ -8,7 +8,7 @@ import {
   PHOSPHORUS_PER_PHOSPHATE,
   productPerThousand,
   totalProduct,
-} from "./fertiliser.ts";
+} from "./fertilizer.ts";
 
 describe("productPerThousand and totalProduct", () => {
   it("1.0 lb N from 28-3-6 needs 3.57 lb/1,000 ft², 21.4 lb on 6,000 ft² (University of Nebraska–Lincoln, Backyard Farmer, 'Lawn Fertilizer Calculations')", () => {
