@@ -1,4 +1,5 @@
 import type { PlanContext } from "../context.ts";
+import { formatDate } from "../format.ts";
 import { civilFromDays, minutesOfLocalTime, localTimeFromMinutes, toDayNumber } from "../dates.ts";
 import type { BlackoutWindow, PlaceRules } from "../schemas/place-rules.ts";
 import { dateOfKey, oneOffKey } from "../step-keys.ts";
@@ -17,7 +18,6 @@ import { SOD_WATERING } from "../tables/sod.ts";
  * stays unaware of places. The rules are what the company entered, never law the engine knows.
  */
 
-const MONTHS = ["January", "February", "March", "April", "May", "June", "July", "August", "September", "October", "November", "December"] as const;
 const WEEKDAY_NAMES = ["Sunday", "Monday", "Tuesday", "Wednesday", "Thursday", "Friday", "Saturday"] as const;
 
 const TEXT = {
@@ -60,8 +60,9 @@ interface Window {
   readonly text: string;
 }
 
+/** "11-15" → "November 15", worded as the engine words any date. */
 function monthDayText(text: string): string {
-  return `${MONTHS[Number(text.slice(0, 2)) - 1] ?? ""} ${Number(text.slice(3, 5))}`;
+  return formatDate(`2000-${text}`);
 }
 
 function windowsOf(blackouts: readonly BlackoutWindow[]): Window[] {
@@ -99,10 +100,6 @@ function weekdaysText(allowed: readonly number[]): string {
   return listText([1, 2, 3, 4, 5, 6, 0].filter((d) => allowed.includes(d)).map((d) => WEEKDAY_NAMES[d] ?? ""));
 }
 
-function longDate(date: string): string {
-  return `${MONTHS[Number(date.slice(5, 7)) - 1] ?? ""} ${Number(date.slice(8, 10))}`;
-}
-
 const withCaution = (cautions: readonly CautionId[], id: CautionId): readonly CautionId[] => (cautions.includes(id) ? cautions : [...cautions, id]);
 
 function rekey(step: PlanStep, date: string): string {
@@ -125,7 +122,7 @@ function movedFeed(ctx: PlanContext, step: PlanStep, offset: number, window: Win
     key: rekey(step, date),
     date,
     phase: ctx.phaseOf(offset),
-    detail: step.detail + TEXT.feedMoved(place, window.text, longDate(step.date)),
+    detail: step.detail + TEXT.feedMoved(place, window.text, formatDate(step.date)),
     cautions: withCaution(step.cautions, "local_ordinances"),
   };
 }
@@ -246,7 +243,7 @@ function newLawnWateringRestricted(ctx: PlanContext): { rules: PlaceRules; until
   const last = newLawnLastDay(ctx);
   if (!rules?.watering || rules.watering.allowedWeekdays.length === 7 || last === null) return null;
   if (last < rules.watering.newLawnExemptDays) return null;
-  return { rules, until: longDate(ctx.dateOf(last)) };
+  return { rules, until: formatDate(ctx.dateOf(last)) };
 }
 
 /** Shared, never mutated: most plans have no place rules, and the engine runs 10,000 plans a batch. */
