@@ -21,14 +21,15 @@ describe("reads batched across concurrent requests", () => {
 
   it("joins reads started by separate I/O callbacks of one turn, as requests from many sockets are", async () => {
     const { reads, batches } = recordingReader();
-    // Two timers due together fire in one timers phase, each its own callback, like two sockets' data.
+    // Two callbacks queued for one phase of the event loop, each its own callback, like two sockets' data.
+    // (Immediates rather than timers: two 1 ms timers land in different turns when the clock ticks between them.)
     const asked = await new Promise<Promise<string | undefined>[]>((done) => {
       const loads: Promise<string | undefined>[] = [];
-      setTimeout(() => loads.push(reads.load(1)), 1);
-      setTimeout(() => {
+      setImmediate(() => loads.push(reads.load(1)));
+      setImmediate(() => {
         loads.push(reads.load(2));
         done(loads);
-      }, 1);
+      });
     });
     await Promise.all(asked);
     expect(batches).toEqual([[1, 2]]);
